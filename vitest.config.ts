@@ -1,11 +1,35 @@
 import { defineConfig } from 'vitest/config';
 
+/** A container engine counts only when testcontainers can reach one (it fails fast otherwise). */
+async function containerEngineReachable(): Promise<boolean> {
+  try {
+    const { getContainerRuntimeClient } = await import('testcontainers');
+    await getContainerRuntimeClient();
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+// The same integration suite runs on the embedded database and, when one is reachable, on a
+// PostgreSQL server (TEST_DATABASE_URL, else a testcontainers container).
+const serverReachable = Boolean(process.env.TEST_DATABASE_URL) || (await containerEngineReachable());
+const integration = (name: string) => ({
+  test: {
+    name,
+    include: ['tests/api/**/*.test.ts', 'tests/db/**/*.test.ts'],
+    globalSetup: ['tests/support/globalSetup.ts'],
+    testTimeout: 60_000,
+    hookTimeout: 120_000,
+  },
+});
+
 export default defineConfig({
   test: {
-    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
-    globalSetup: ['tests/support/globalSetup.ts'],
-    testTimeout: 30_000,
-    hookTimeout: 120_000,
-    reporters: ['default'],
+    projects: [
+      { test: { name: 'unit', include: ['tests/src/**/*.test.ts', 'tests/seed/**/*.test.ts'], testTimeout: 30_000 } },
+      integration('api-embedded'),
+      ...(serverReachable ? [integration('api-server')] : []),
+    ],
   },
 });

@@ -1,0 +1,49 @@
+import { OpenAPIHono } from '@hono/zod-openapi';
+import { bodyLimit } from 'hono/body-limit';
+import { secureHeaders } from 'hono/secure-headers';
+import { transactionalWrites } from './transactionalWrites.ts';
+import type { Db } from '../db/Db.ts';
+import type { AppEnv } from './AppEnv.ts';
+import { authenticate } from './auth/authenticate.ts';
+import type { AppConfig } from './env.ts';
+import { handleError } from './problem/handleError.ts';
+import { problemResponse } from './problem/problemResponse.ts';
+import { validationHook } from './problem/validationHook.ts';
+import { docsRoutes } from './routes/docsRoutes.ts';
+import { keyRoutes } from './routes/keyRoutes.ts';
+import { materialRoutes } from './routes/materialRoutes.ts';
+import { modelRoutes } from './routes/modelRoutes.ts';
+import { readingRoutes } from './routes/readingRoutes.ts';
+
+export interface AppDependencies {
+  db: Db;
+  config: AppConfig;
+}
+
+/** The whole HTTP surface; the database is passed in so tests can hand it a transaction. */
+export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> {
+  const app = new OpenAPIHono<AppEnv>({ defaultHook: validationHook });
+  app.onError(handleError);
+  app.notFound((c) => problemResponse(404, 'not_found', `No route ${c.req.method} ${c.req.path}.`));
+  app.use('*', secureHeaders());
+  app.use('*', async (c, next) => {
+    c.set('db', db);
+    c.set('config', config);
+    await next();
+  });
+  const importPaths = /\/import$/;
+  app.use('/v1/*', async (c, next) => {
+    const maxSize = importPaths.test(c.req.path) ? config.IMPORT_LIMIT_BYTES : config.BODY_LIMIT_BYTES;
+    return bodyLimit({ maxSize, onError: () => problemResponse(413, 'payload_too_large', `The body exceeds ${maxSize} bytes.`) })(c, next);
+  });
+  app.use('/v1/*', authenticate());
+  app.use('/v1/*', transactionalWrites());
+
+  app.get('/health', (c) => c.json({ status: 'ok' }));
+  docsRoutes(app);
+  keyRoutes(app);
+  materialRoutes(app);
+  modelRoutes(app);
+  readingRoutes(app);
+  return app;
+}

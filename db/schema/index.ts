@@ -1,0 +1,5 @@
+export * from './enums.ts';
+export * from './labs.ts';
+export * from './materials.ts';
+export * from './models.ts';
+export * from './readings.ts';
