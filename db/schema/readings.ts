@@ -12,6 +12,8 @@ export const readingImports = pgTable(
     format: text('format').notNull(),
     rowCount: doublePrecision('row_count').notNull(),
     idempotencyKey: text('idempotency_key'),
+    /** SHA-256 of the request body, so a replayed Idempotency-Key with another body is refused. */
+    bodySha256: text('body_sha256'),
     importedAt: timestamp('imported_at', { withTimezone: true, precision: 3 }).notNull().defaultNow(),
     importedByKeyId: uuid('imported_by_key_id'),
   },

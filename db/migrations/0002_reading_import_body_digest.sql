@@ -1,0 +1,1 @@
+ALTER TABLE "reading_imports" ADD COLUMN "body_sha256" text;
