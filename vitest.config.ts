@@ -17,7 +17,7 @@ const serverReachable = Boolean(process.env.TEST_DATABASE_URL) || (await contain
 const integration = (name: string) => ({
   test: {
     name,
-    include: ['tests/api/**/*.test.ts', 'tests/db/**/*.test.ts'],
+    include: ['tests/api/**/*.test.ts', 'tests/db/**/*.test.ts', 'tests/seed/**/*.test.ts'],
     globalSetup: ['tests/support/globalSetup.ts'],
     testTimeout: 60_000,
     hookTimeout: 120_000,
@@ -27,7 +27,7 @@ const integration = (name: string) => ({
 export default defineConfig({
   test: {
     projects: [
-      { test: { name: 'unit', include: ['tests/src/**/*.test.ts', 'tests/seed/**/*.test.ts'], testTimeout: 30_000 } },
+      { test: { name: 'unit', include: ['tests/src/**/*.test.ts'], testTimeout: 30_000 } },
       integration('api-embedded'),
       ...(serverReachable ? [integration('api-server')] : []),
     ],

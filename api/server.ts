@@ -3,12 +3,27 @@ import { migrateDatabase } from '../db/migrateDatabase.ts';
 import { openDatabase } from '../db/openDatabase.ts';
 import { bootstrapEmptyDatabase } from '../seed/bootstrapEmptyDatabase.ts';
 import { createApp } from './createApp.ts';
-import { parseEnv } from './env.ts';
+import { type AppConfig, parseEnv } from './env.ts';
 
-const config = parseEnv(process.env);
-const handle = await openDatabase({ databaseUrl: config.DATABASE_URL, dataDir: config.DATA_DIR, poolSize: config.DB_POOL_SIZE });
-await migrateDatabase(handle);
-const firstStart = await bootstrapEmptyDatabase(handle.db, config.LOAD_DEMO);
+async function startDatabase(config: AppConfig) {
+  try {
+    const handle = await openDatabase({ databaseUrl: config.DATABASE_URL, dataDir: config.DATA_DIR, poolSize: config.DB_POOL_SIZE });
+    await migrateDatabase(handle);
+    return { handle, firstStart: await bootstrapEmptyDatabase(handle.db, config.LOAD_DEMO) };
+  } catch (error) {
+    console.error(`fringe-ledger could not start: ${(error as Error).message}`);
+    process.exit(1);
+  }
+}
+
+let config: AppConfig;
+try {
+  config = parseEnv(process.env);
+} catch (error) {
+  console.error((error as Error).message);
+  process.exit(1);
+}
+const { handle, firstStart } = await startDatabase(config);
 
 const app = createApp({ db: handle.db, config });
 const server = serve({ fetch: app.fetch, port: config.PORT, hostname: config.HOST }, (info) => {
