@@ -20,14 +20,18 @@ export function takeDataDirLock(dataDir: string): () => void {
     writeFileSync(lockPath, String(process.pid), { flag: 'wx' });
   } catch (error) {
     if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
-    const holder = Number(readFileSync(lockPath, 'utf8').trim());
-    if (Number.isInteger(holder) && holder !== process.pid && isAlive(holder)) {
-      throw new Error(
-        `The data folder ${dataDir} is in use by process ${holder}. Stop that process first, ` +
-          'or work through its API: the embedded database allows one process at a time.',
-      );
-    }
-    writeFileSync(lockPath, String(process.pid));
+    takeOverStaleLock(lockPath, dataDir);
   }
   return () => rmSync(lockPath, { force: true });
+}
+
+function takeOverStaleLock(lockPath: string, dataDir: string): void {
+  const holder = Number(readFileSync(lockPath, 'utf8').trim());
+  if (Number.isInteger(holder) && holder !== process.pid && isAlive(holder)) {
+    throw new Error(
+      `The data folder ${dataDir} is in use by process ${holder}. Stop that process first, ` +
+        'or work through its API: the embedded database allows one process at a time.',
+    );
+  }
+  writeFileSync(lockPath, String(process.pid));
 }

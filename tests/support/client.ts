@@ -22,7 +22,7 @@ export function clientFor(app: ReturnType<typeof createApp>, key: string | undef
     const withBody = init.body !== undefined && method !== 'GET' && method !== 'HEAD';
     const res = await app.request(path, { method, headers, ...(withBody ? { body: init.body } : {}) });
     const text = await res.text();
-    let body: unknown = undefined;
+    let body: unknown;
     try {
       body = text ? JSON.parse(text) : undefined;
     } catch {
