@@ -77,8 +77,10 @@ export function appendRamp(
       numbers: { rateCPerH: rate, lagC, allowedGradientC: draft.allowedGradientC, proposedRateCPerH: maxRateCPerH },
     });
   }
-  // With a finite Biot number the surface itself trails the oven air by R·L²/(α·Bi).
-  draft.pendingLagC = lagC * (1 + 2 / draft.biot);
+  // With a finite Biot number the surface itself trails the oven air by R·L²/(α·Bi). The
+  // quasi-steady value is not reached on a short ramp, and the centre can never trail by more
+  // than the ramp's span plus what it already trailed.
+  draft.pendingLagC = Math.min(lagC * (1 + 2 / draft.biot), spanC + draft.pendingLagC);
   draft.elapsedH += durationH;
   draft.temperatureC = step.toC;
 }
