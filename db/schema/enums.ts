@@ -57,3 +57,5 @@ export const readingMethod = pgEnum('reading_method', [
 ]);
 
 export const readingSign = pgEnum('reading_sign', ['positive', 'negative', 'unknown']);
+
+export const calibrationSpecimen = pgEnum('calibration_specimen', ['disk', 'tension_strip', 'bending_beam']);

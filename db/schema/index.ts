@@ -3,3 +3,4 @@ export * from './labs.ts';
 export * from './materials.ts';
 export * from './models.ts';
 export * from './readings.ts';
+export * from './analysis.ts';
