@@ -19,8 +19,8 @@ function density(t: number, nu: number): number {
  * bisection whenever a step would leave the bracket, so it cannot diverge.
  *
  * @example
- * studentTQuantile(0.975, 10); // 2.2281388519862766
- * studentTQuantile(0.025, 10); // -2.2281388519862766
+ * studentTQuantile(0.975, 10); // 2.2281388519862757
+ * studentTQuantile(0.025, 10); // -2.228138851986277
  */
 export function studentTQuantile(p: number, degreesOfFreedom: number): number {
   requireNumber('p', p, { above: 0 });
