@@ -1,3 +1,4 @@
+import { requireNumber } from '../guards/requireNumber.ts';
 import { requireMeasured } from '../uncertainty/requireMeasured.ts';
 import type { Measured } from '../uncertainty/Measured.ts';
 
@@ -13,5 +14,9 @@ import type { Measured } from '../uncertainty/Measured.ts';
 export function differenceOfOrders(later: Measured, earlier: Measured): Measured {
   const a = requireMeasured('later', later);
   const b = requireMeasured('earlier', earlier);
-  return { value: a.value - b.value, uncertainty: Math.hypot(a.uncertainty, b.uncertainty) };
+  // Absurdly large inputs could overflow; fail loudly rather than hand back Infinity.
+  return {
+    value: requireNumber('difference', a.value - b.value),
+    uncertainty: requireNumber('difference uncertainty', Math.hypot(a.uncertainty, b.uncertainty)),
+  };
 }

@@ -13,6 +13,8 @@ export interface PermanentSetShareOptions {
 
 // sign with sgn(0) = +1: at |x|'s kink either one-sided slope has magnitude 1, and using one
 // keeps u(share) from collapsing to zero exactly where the share is least certain.
+const MAX_SD_IN_UNIT_INTERVAL = 0.5;
+
 const sgn = (x: number): number => (x >= 0 ? 1 : -1);
 
 /**
@@ -57,12 +59,19 @@ export function permanentSetShare(
   const notes: string[] = [];
   if (fabNearZero) notes.push(`N_fab is within ${k}·u of zero: share near 1, first-order uncertainty only approximate`);
   if (setNearZero) notes.push(`N_set is within ${k}·u of zero: share near 0, first-order uncertainty only approximate`);
+  const firstOrder = Math.hypot(postTerm, fabTerm);
+  // A quantity confined to 0..1 has a standard deviation of at most 0.5 (Popoviciu's
+  // inequality); a larger first-order value only says the linearisation has broken down.
+  const uncertainty = Math.min(firstOrder, MAX_SD_IN_UNIT_INTERVAL);
+  if (firstOrder > MAX_SD_IN_UNIT_INTERVAL) {
+    notes.push(`first-order uncertainty ${firstOrder.toPrecision(3)} exceeds 0.5, the most a share in 0..1 can have: capped at 0.5`);
+  }
   if (possibleRelaxationOrSignReversal) {
     notes.push('unsigned N_post below N_fab: the residual relaxed, or the load reversed its sign; the share assumes no reversal');
   }
   return {
     defined: true,
-    share: { value: absSet / d, uncertainty: Math.hypot(postTerm, fabTerm) },
+    share: { value: absSet / d, uncertainty },
     coverageFactor: k,
     possibleRelaxationOrSignReversal,
     notes,

@@ -30,9 +30,8 @@ export function stressFromOrder(
     { sensitivity: n.value / t.value, uncertainty: f.uncertainty },
     { sensitivity: -value / t.value, uncertainty: t.uncertainty },
   ]);
-  requireNumber('stressMPa', value);
   return {
-    stressMPa: { value, uncertainty },
+    stressMPa: { value: requireNumber('stressMPa', value), uncertainty: requireNumber('stressMPa uncertainty', uncertainty) },
     kind: onFreeEdge ? 'edge_stress' : 'principal_stress_difference',
   };
 }

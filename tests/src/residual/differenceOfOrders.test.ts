@@ -31,3 +31,9 @@ describe('differenceOfOrders', () => {
     expect(() => differenceOfOrders({ value: 1, uncertainty: -0.1 }, { value: 0, uncertainty: 0 })).toThrow(DomainError);
   });
 });
+
+describe('differenceOfOrders overflow', () => {
+  it('throws invalid_input rather than return Infinity for absurd magnitudes', () => {
+    expect(() => differenceOfOrders({ value: 1.7e308, uncertainty: 0 }, { value: -1.7e308, uncertainty: 0 })).toThrow(DomainError);
+  });
+});

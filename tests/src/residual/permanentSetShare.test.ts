@@ -57,6 +57,15 @@ describe('permanentSetShare', () => {
     expect(r.notes.join(' ')).toContain('share near 1');
   });
 
+  it('caps a runaway first-order uncertainty at 0.5, the largest SD in 0..1 [M: Popoviciu inequality]', () => {
+    // d = 0.05 while u(N_post) = 0.2: the linearisation gives u ≈ 4
+    const r = permanentSetShare(m(0.05, 0.001), m(0.05, 0.2), { signsKnown: true });
+    expect(r.defined).toBe(true);
+    if (!r.defined) return;
+    expect(r.share.uncertainty).toBe(0.5);
+    expect(r.notes.join(' ')).toContain('capped at 0.5');
+  });
+
   it('flags a fall in unsigned magnitude as possible relaxation or sign reversal', () => {
     const r = permanentSetShare(m(0.5, 0.01), m(0.35, 0.01), { signsKnown: false });
     expect(r.possibleRelaxationOrSignReversal).toBe(true);
