@@ -26,9 +26,11 @@ const DEFAULTS: OvenLogTolerances = {
  * fails the run; remarks alone pass it with remarks. Linear in the number of samples.
  *
  * @example
- * compareOvenLog(plan, log); // log of a 6 mm acrylic cycle followed within ±0.2 °C
- * // { verdict: 'pass', findings: [], maxAbsDeviationC: 0.41, rmsDeviationC: 0.15,
- * //   soakHolds: [{ segmentNumber: 2, plannedH: 6, heldH: 6.13, ... }], ... }
+ * // 6 mm cast acrylic plan (23→80 °C at 30 °C/h, 6 h soak, 80→49 °C at 30 °C/h); a log
+ * // sampled every 0.1 h that follows it to 0.1 °C:
+ * compareOvenLog(plan, log);
+ * // { verdict: 'pass', findings: [], maxAbsDeviationC: 0.0, rmsDeviationC: 0.0,
+ * //   soakHolds: [{ segmentNumber: 2, temperatureC: 80, plannedH: 6, heldH: 6, fromH: 1.9, toH: 7.9 }], ... }
  */
 export function compareOvenLog(
   plan: Pick<AnnealingPlan, 'segments'>,

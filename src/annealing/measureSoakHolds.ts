@@ -7,8 +7,9 @@ import type { SoakHold } from './OvenLogComparison.ts';
  * the full time still counts. Each soak scans only its own samples and the run around them.
  *
  * @example
+ * // 6 mm cast acrylic plan, a log every 0.1 h that follows it:
  * measureSoakHolds(timesH, temperaturesC, plan.segments, 2);
- * // [{ segmentNumber: 2, temperatureC: 80, plannedH: 6, heldH: 6.1, fromH: 1.85, toH: 7.95 }]
+ * // [{ segmentNumber: 2, temperatureC: 80, plannedH: 6, heldH: 6, fromH: 1.9, toH: 7.9 }]
  */
 export function measureSoakHolds(
   timesH: readonly number[],

@@ -2,9 +2,9 @@ import type { PlanSegment } from '../../../src/annealing/AnnealingPlan.ts';
 import type { OvenLogSample } from '../../../src/annealing/OvenLogComparison.ts';
 import { plannedTemperatures } from '../../../src/annealing/plannedTemperatures.ts';
 
-/** Small seeded generator (mulberry32) so noisy test logs are the same on every run. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
+/** Small repeatable generator (mulberry32) so noisy test logs are the same on every run. */
+export function repeatableRandom(stream: number): () => number {
+  let a = stream >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;
     let t = a;
@@ -23,7 +23,7 @@ export function syntheticOvenLog(
   options: {
     stepH: number;
     noiseC: number;
-    seed: number;
+    stream: number;
     extraH?: number;
     shape?: (tH: number, plannedC: number) => number;
     gap?: [number, number];
@@ -38,7 +38,7 @@ export function syntheticOvenLog(
     times.push(t);
   }
   const planned = plannedTemperatures(segments, times);
-  const rand = seededRandom(options.seed);
+  const rand = repeatableRandom(options.stream);
   return times.map((t, i) => {
     const ideal = planned[i] ?? last.endTemperatureC;
     const shaped = options.shape ? options.shape(t, ideal) : ideal;
