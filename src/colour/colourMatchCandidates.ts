@@ -45,7 +45,7 @@ export function colourMatchCandidates(
   const d = sequence.displayedLab.map((lab) => deltaE2000(targetLab, { mode: 'lab65', ...lab }));
   const last = d.length - 1;
   const minima = d
-    .map((v, i) => i)
+    .map((_, i) => i)
     .filter((i) => (i === 0 || d[i]! < d[i - 1]!) && (i === last || d[i]! <= d[i + 1]!))
     .sort((a, b) => d[a]! - d[b]!);
   const basins: Basin[] = [];

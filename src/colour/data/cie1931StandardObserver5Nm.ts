@@ -10,7 +10,7 @@
  * spot-compared with a second copy (repository coloria-dev/color-data, path
  * observers/cie-1931-2.json, commit 08beefb644e9). See README.md beside this file.
  */
-export const cie1931StandardObserver5Nm = {
+export const cie1931StandardObserver5Nm: { startNm: number; stepNm: number; xBar: readonly number[]; yBar: readonly number[]; zBar: readonly number[] } = {
   startNm: 380,
   stepNm: 5,
   // prettier-ignore
@@ -49,4 +49,4 @@ export const cie1931StandardObserver5Nm = {
     0, 0, 0, 0, 0, 0, 0, 0, 0, 0,
     0,
   ],
-} as const;
+};

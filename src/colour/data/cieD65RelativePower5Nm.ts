@@ -8,7 +8,7 @@
  * of that CIE file (repository JakeCambium/532nm-and-695nm-dualband-Cary-spectrophotometer-plotting,
  * path CIE_std_illum_D65.csv, commit f5d3df25b1ec). See README.md beside this file.
  */
-export const cieD65RelativePower5Nm = {
+export const cieD65RelativePower5Nm: { startNm: number; stepNm: number; relativePower: readonly number[] } = {
   startNm: 380,
   stepNm: 5,
   // prettier-ignore
@@ -23,4 +23,4 @@ export const cieD65RelativePower5Nm = {
     69.8856, 72.4863, 75.087, 69.3398, 63.5927, 55.0054, 46.4182, 56.6118, 66.8054, 65.0941,
     63.3828,
   ],
-} as const;
+};
