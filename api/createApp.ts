@@ -9,6 +9,7 @@ import type { AppConfig } from './env.ts';
 import { handleError } from './problem/handleError.ts';
 import { problemResponse } from './problem/problemResponse.ts';
 import { validationHook } from './problem/validationHook.ts';
+import { analysisRoutes } from './routes/analysisRoutes.ts';
 import { docsRoutes } from './routes/docsRoutes.ts';
 import { keyRoutes } from './routes/keyRoutes.ts';
 import { materialRoutes } from './routes/materialRoutes.ts';
@@ -45,5 +46,6 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   materialRoutes(app);
   modelRoutes(app);
   readingRoutes(app);
+  analysisRoutes(app);
   return app;
 }
