@@ -15,6 +15,7 @@ import { keyRoutes } from './routes/keyRoutes.ts';
 import { materialRoutes } from './routes/materialRoutes.ts';
 import { modelRoutes } from './routes/modelRoutes.ts';
 import { readingRoutes } from './routes/readingRoutes.ts';
+import { readingTransferRoutes } from './routes/readingTransferRoutes.ts';
 
 export interface AppDependencies {
   db: Db;
@@ -45,6 +46,8 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   keyRoutes(app);
   materialRoutes(app);
   modelRoutes(app);
+  // Before readingRoutes: /v1/readings/export must not be taken for /v1/readings/{id}.
+  readingTransferRoutes(app);
   readingRoutes(app);
   analysisRoutes(app);
   return app;
