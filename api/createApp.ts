@@ -10,6 +10,7 @@ import { handleError } from './problem/handleError.ts';
 import { problemResponse } from './problem/problemResponse.ts';
 import { validationHook } from './problem/validationHook.ts';
 import { analysisRoutes } from './routes/analysisRoutes.ts';
+import { calcRoutes } from './routes/calcRoutes.ts';
 import { docsRoutes } from './routes/docsRoutes.ts';
 import { keyRoutes } from './routes/keyRoutes.ts';
 import { materialRoutes } from './routes/materialRoutes.ts';
@@ -50,5 +51,6 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   readingTransferRoutes(app);
   readingRoutes(app);
   analysisRoutes(app);
+  calcRoutes(app);
   return app;
 }
