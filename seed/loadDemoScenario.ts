@@ -10,6 +10,7 @@ import { recordModelEvent } from '../db/operations/models/recordModelEvent.ts';
 import { amendReading } from '../db/operations/readings/amendReading.ts';
 import { recordReading } from '../db/operations/readings/recordReading.ts';
 import { materials } from '../db/schema/index.ts';
+import { loadDemoCalibrationsAndLimits } from './demoCalibrationsAndLimits.ts';
 import { DEMO_BATCHES, DEMO_LAB_NAME, DEMO_MODELS, DEMO_OPERATORS, type DemoModel, type DemoReading } from './demoScenario.ts';
 
 const HOUR_MS = 3_600_000;
@@ -27,7 +28,8 @@ function readingMethod(r: DemoReading) {
 
 async function loadModel(db: Db, actor: Actor, batchId: string, spec: DemoModel, now: number, index: number) {
   const { sites: siteSpecs, machiningMethod, tool, machinedDaysAgo, batch: _batch, ...geometry } = spec;
-  const model = await createModel(db, actor, { ...geometry, batchId, thicknessUncertaintyMm: 0.02 });
+  const project = spec.batch.startsWith('PC') ? { project: 'notch residual study' } : {};
+  const model = await createModel(db, actor, { ...geometry, ...project, batchId, thicknessUncertaintyMm: 0.02 });
   const machinedAt = now - machinedDaysAgo * 24 * HOUR_MS;
   const operator = DEMO_OPERATORS[index % DEMO_OPERATORS.length]!;
   const at = (hours: number) => new Date(machinedAt + hours * HOUR_MS).toISOString();
@@ -74,6 +76,7 @@ export async function loadDemoScenario(db: Db, now: number = Date.now()): Promis
     }
     let index = 0;
     for (const spec of DEMO_MODELS) await loadModel(tx, actor, batchIds.get(spec.batch)!, spec, now, index++);
+    await loadDemoCalibrationsAndLimits(tx, actor, batchIds, now);
     await amendFirstReadingOf(tx, actor);
     return { labId: lab.labId, labName: DEMO_LAB_NAME, keys: [lab.adminKey, technician, viewer] };
   });
