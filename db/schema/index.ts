@@ -4,3 +4,4 @@ export * from './materials.ts';
 export * from './models.ts';
 export * from './readings.ts';
 export * from './analysis.ts';
+export * from './annealing.ts';
