@@ -17,6 +17,7 @@ import { materialRoutes } from './routes/materialRoutes.ts';
 import { modelRoutes } from './routes/modelRoutes.ts';
 import { readingRoutes } from './routes/readingRoutes.ts';
 import { readingTransferRoutes } from './routes/readingTransferRoutes.ts';
+import { trendRoutes } from './routes/trendRoutes.ts';
 
 export interface AppDependencies {
   db: Db;
@@ -52,5 +53,6 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   readingRoutes(app);
   analysisRoutes(app);
   calcRoutes(app);
+  trendRoutes(app);
   return app;
 }
