@@ -81,6 +81,8 @@ export const modelEvents = pgTable(
   (t) => [
     foreignKey({ name: 'model_events_model_same_lab_fk', columns: [t.labId, t.modelId], foreignColumns: [models.labId, models.id] }),
     index('model_events_model_time_idx').on(t.modelId, t.occurredAt),
+    // Trends look up machining windows per model; machining is a small share of all events.
+    index('model_events_machined_idx').on(t.labId, t.modelId, t.occurredAt).where(sql`${t.kind} = 'machined'`),
     check('model_events_operator_not_blank', sql`length(trim(${t.operator})) > 0`),
     check('model_events_machining_needs_method', sql`${t.kind} <> 'machined' or ${t.machiningMethod} is not null`),
     check('model_events_temperature_range', sql`${t.temperatureC} is null or ${t.temperatureC} between -80 and 1600`),

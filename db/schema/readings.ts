@@ -56,6 +56,8 @@ export const readings = pgTable(
     uniqueIndex('readings_one_successor').on(t.supersedesId),
     index('readings_site_stage_idx').on(t.siteId, t.stage, t.observedAt),
     index('readings_lab_recorded_idx').on(t.labId, t.recordedAt, t.id),
+    // Trend queries select one stage of a lab, often within a date range.
+    index('readings_lab_stage_observed_idx').on(t.labId, t.stage, t.observedAt),
     check('readings_operator_not_blank', sql`length(trim(${t.operator})) > 0`),
     check('readings_load_only_under_load', sql`(${t.stage} = 'under_load') = (${t.loadN} is not null)`),
     check('readings_load_range', sql`${t.loadN} is null or (${t.loadN} > 0 and ${t.loadN} < 1e7)`),

@@ -1,0 +1,2 @@
+CREATE INDEX "model_events_machined_idx" ON "model_events" USING btree ("lab_id","model_id","occurred_at") WHERE "model_events"."kind" = 'machined';--> statement-breakpoint
+CREATE INDEX "readings_lab_stage_observed_idx" ON "readings" USING btree ("lab_id","stage","observed_at");
