@@ -54,6 +54,7 @@ export const readingMethod = pgEnum('reading_method', [
   'senarmont',
   'compensator',
   'direct',
+  'white_light_colour',
 ]);
 
 export const readingSign = pgEnum('reading_sign', ['positive', 'negative', 'unknown']);

@@ -11,7 +11,22 @@ export type ReadingMethodInput =
   // movedFringe 'lower': fringe n moved to the point, N = n + β/180; 'upper': fringe n+1 moved, N = (n+1) − β/180
   | { method: 'senarmont'; wholeOrder: number; analyzerRotationDeg: number } // N = n + β/180 (ASTM C148 method B, ASTM F218)
   | { method: 'compensator'; retardationNm: number } // N = δ/λ
-  | { method: 'direct'; fringeOrder: number }; // a fractional order read directly
+  | { method: 'direct'; fringeOrder: number } // a fractional order read directly
+  | WhiteLightColourInput;
+
+/**
+ * A white-light isochromatic colour: exactly one of an sRGB colour (photo, swatch), a trade
+ * name of the sequence, or a point picked on the computed colour scale (its retardation).
+ * The fields are optional in the type so untyped callers get a named error, not a crash.
+ */
+export interface WhiteLightColourInput {
+  method: 'white_light_colour';
+  srgbHex?: string;
+  namedColour?: string;
+  retardationNm?: number;
+  /** The polariscope lamp; 'D65' when not given. */
+  illuminant?: 'D65' | 'A' | 'E';
+}
 
 /** The light the reading was made in; `null` means white light (see WHITE_LIGHT_EFFECTIVE_WAVELENGTH_NM). */
 export interface LightInput {

@@ -1,5 +1,6 @@
 import { DomainError } from '../errors/DomainError.ts';
 import type { Measured } from '../uncertainty/Measured.ts';
+import { fringeOrderFromColourReading } from './fringeOrderFromColourReading.ts';
 import { fringeOrderFromCompensator } from './fringeOrderFromCompensator.ts';
 import { fringeOrderFromDirect } from './fringeOrderFromDirect.ts';
 import { fringeOrderFromSenarmont } from './fringeOrderFromSenarmont.ts';
@@ -38,6 +39,11 @@ export function fringeOrderFromReading(
   uncertaintyFringes?: number,
 ): FringeOrderFromReading {
   const wavelengthNm = resolveWavelengthNm(light);
+  if (reading.method === 'white_light_colour') {
+    // The colour match yields the retardation itself, so it is kept rather than recomputed from N.
+    const { fringeOrder, formula, retardationNm } = fringeOrderFromColourReading(reading, wavelengthNm, uncertaintyFringes);
+    return { fringeOrder, formula, retardationNm, wavelengthNm };
+  }
   const { fringeOrder, formula } = orderForMethod(reading, wavelengthNm, uncertaintyFringes);
   const { retardationNm } =
     reading.method === 'compensator'
@@ -46,7 +52,7 @@ export function fringeOrderFromReading(
   return { fringeOrder, formula, retardationNm, wavelengthNm };
 }
 
-function orderForMethod(reading: ReadingMethodInput, wavelengthNm: number, u: number | undefined): MethodFringeOrder {
+function orderForMethod(reading: Exclude<ReadingMethodInput, { method: 'white_light_colour' }>, wavelengthNm: number, u: number | undefined): MethodFringeOrder {
   switch (reading.method) {
     case 'whole_order':
       return fringeOrderFromWholeCount(reading.wholeOrder, u);
@@ -62,7 +68,7 @@ function orderForMethod(reading: ReadingMethodInput, wavelengthNm: number, u: nu
       // Reachable from untyped callers (JSON); the compiler proves every known method is handled.
       const unknown: { method?: unknown } = reading;
       throw new DomainError('invalid_input', `unknown reading method ${String(unknown.method)}`, [
-        { field: 'method', message: `must be one of whole_order, tardy, senarmont, compensator, direct` },
+        { field: 'method', message: `must be one of whole_order, tardy, senarmont, compensator, direct, white_light_colour` },
       ]);
     }
   }

@@ -1,0 +1,1 @@
+ALTER TYPE "public"."reading_method" ADD VALUE 'white_light_colour';
