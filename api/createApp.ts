@@ -9,6 +9,7 @@ import type { AppConfig } from './env.ts';
 import { handleError } from './problem/handleError.ts';
 import { problemResponse } from './problem/problemResponse.ts';
 import { validationHook } from './problem/validationHook.ts';
+import { annealingRoutes } from './routes/annealingRoutes.ts';
 import { analysisRoutes } from './routes/analysisRoutes.ts';
 import { calcRoutes } from './routes/calcRoutes.ts';
 import { docsRoutes } from './routes/docsRoutes.ts';
@@ -54,5 +55,6 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   analysisRoutes(app);
   calcRoutes(app);
   trendRoutes(app);
+  annealingRoutes(app);
   return app;
 }
