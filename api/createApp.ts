@@ -14,6 +14,7 @@ import { analysisRoutes } from './routes/analysisRoutes.ts';
 import { calcRoutes } from './routes/calcRoutes.ts';
 import { docsRoutes } from './routes/docsRoutes.ts';
 import { keyRoutes } from './routes/keyRoutes.ts';
+import { labArchiveRoutes } from './routes/labArchiveRoutes.ts';
 import { materialRoutes } from './routes/materialRoutes.ts';
 import { modelRoutes } from './routes/modelRoutes.ts';
 import { readingRoutes } from './routes/readingRoutes.ts';
@@ -47,6 +48,7 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   app.get('/health', (c) => c.json({ status: 'ok' }));
   docsRoutes(app);
   keyRoutes(app);
+  labArchiveRoutes(app);
   materialRoutes(app);
   modelRoutes(app);
   // Before readingRoutes: /v1/readings/export must not be taken for /v1/readings/{id}.

@@ -1,9 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { importLabArchive } from '../../../db/archive/importLabArchive.ts';
-import { loadDemoScenario } from '../../../seed/loadDemoScenario.ts';
-import { addAnnealingRecords } from '../../support/archiveFixtures.ts';
 import { archiveLines, archiveOf, chunksOf } from '../../support/archiveBytes.ts';
-import { countRows } from '../../support/countRows.ts';
+import { demoArchive } from '../../support/demoArchive.ts';
 import { rolledBack } from '../../support/rolledBack.ts';
 import { testDatabase } from '../../support/testDatabase.ts';
 
@@ -16,15 +14,6 @@ function comparable(lines: string[]): string[] {
     if (!tag) return line;
     const { createdAt: _createdAt, ...rest } = JSON.parse(line.slice(tag.length)) as Record<string, unknown>;
     return `${tag}${JSON.stringify(rest)}`;
-  });
-}
-
-async function demoArchive() {
-  const db = await testDatabase();
-  return rolledBack(db, async (tx) => {
-    const demo = await loadDemoScenario(tx);
-    const { sharedGuidanceId } = await addAnnealingRecords(tx, demo.labId);
-    return { bytes: await archiveOf(tx, demo.labId), labId: demo.labId, sharedGuidanceId, before: await countRows(tx) };
   });
 }
 
