@@ -2,6 +2,7 @@ import { OpenAPIHono } from '@hono/zod-openapi';
 import { bodyLimit } from 'hono/body-limit';
 import { secureHeaders } from 'hono/secure-headers';
 import { transactionalWrites } from './transactionalWrites.ts';
+import { utf8JsonBodies } from './utf8JsonBodies.ts';
 import type { Db } from '../db/Db.ts';
 import type { AppEnv } from './AppEnv.ts';
 import { authenticate } from './auth/authenticate.ts';
@@ -43,6 +44,7 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
     return bodyLimit({ maxSize, onError: () => problemResponse(413, 'payload_too_large', `The body exceeds ${maxSize} bytes.`) })(c, next);
   });
   app.use('/v1/*', authenticate());
+  app.use('/v1/*', utf8JsonBodies(importPaths));
   app.use('/v1/*', transactionalWrites());
 
   app.get('/health', (c) => c.json({ status: 'ok' }));

@@ -52,6 +52,7 @@ export function databaseErrorToProblem(error: unknown): MappedProblem | undefine
     case '22008':
     case '22023':
     case '22021':
+    case '22P05':
       return { status: 422, code: 'invalid_input', detail: pg.message ?? 'A value has the wrong form.' };
     case 'FL001':
       return { status: 409, code: 'record_immutable', detail: 'Records are never edited or deleted; submit an amendment.' };

@@ -2,7 +2,7 @@ import type { Db } from '../../db/Db.ts';
 import { createLab } from '../../db/operations/createLab.ts';
 import { createApiKey } from '../../db/operations/keys/createApiKey.ts';
 import { createApp } from '../../api/createApp.ts';
-import { defaultConfig } from '../../api/env.ts';
+import { type AppConfig, defaultConfig } from '../../api/env.ts';
 import { testDatabase } from './testDatabase.ts';
 import { type Client, clientFor } from './client.ts';
 import { type Factories, factoriesFor } from './factories.ts';
@@ -27,13 +27,14 @@ let labCounter = 0;
 
 /**
  * Runs a test inside one transaction that is always rolled back, with a fresh lab, a key per
- * role, and the app wired to that transaction, so tests never see each other's rows.
+ * role, and the app wired to that transaction, so tests never see each other's rows. `config`
+ * overrides settings such as body limits for the tests that probe them.
  */
-export async function inLab(test: (lab: LabContext) => Promise<void>): Promise<void> {
+export async function inLab(test: (lab: LabContext) => Promise<void>, config: Partial<AppConfig> = {}): Promise<void> {
   const db = await testDatabase();
   try {
     await db.transaction(async (tx) => {
-      const app = createApp({ db: tx, config: defaultConfig() });
+      const app = createApp({ db: tx, config: defaultConfig(config) });
       const lab = await createLab(tx, `test lab ${process.pid}-${++labCounter}`);
       const technician = await createApiKey(tx, lab.labId, { label: 'technician', role: 'technician' });
       const viewer = await createApiKey(tx, lab.labId, { label: 'viewer', role: 'viewer' });
