@@ -54,6 +54,6 @@ export function trendReadingsSql(labId: string, filter: TrendFilter, options: Tr
       where e.lab_id = ${labId}::uuid and e.kind = 'machined'
     ) mach on mach.model_id = m.id and mach.occurred_at <= r.observed_at and (mach.next_at is null or r.observed_at < mach.next_at)
     where ${sql.join(conditions, sql` and `)}
-      and not exists (select 1 from readings nx where nx.supersedes_id = r.id)
+      and not exists (select 1 from readings nx where nx.supersedes_id = r.id and nx.supersedes_id is not null)
   )`;
 }
