@@ -10,6 +10,7 @@ import { recordModelEvent } from '../db/operations/models/recordModelEvent.ts';
 import { amendReading } from '../db/operations/readings/amendReading.ts';
 import { recordReading } from '../db/operations/readings/recordReading.ts';
 import { materials } from '../db/schema/index.ts';
+import { loadDemoAnnealing } from './demoAnnealing.ts';
 import { loadDemoCalibrationsAndLimits } from './demoCalibrationsAndLimits.ts';
 import { DEMO_BATCHES, DEMO_LAB_NAME, DEMO_MODELS, DEMO_OPERATORS, type DemoModel, type DemoReading } from './demoScenario.ts';
 
@@ -77,6 +78,7 @@ export async function loadDemoScenario(db: Db, now: number = Date.now()): Promis
     let index = 0;
     for (const spec of DEMO_MODELS) await loadModel(tx, actor, batchIds.get(spec.batch)!, spec, now, index++);
     await loadDemoCalibrationsAndLimits(tx, actor, batchIds, now);
+    await loadDemoAnnealing(tx, actor, now);
     await amendFirstReadingOf(tx, actor);
     return { labId: lab.labId, labName: DEMO_LAB_NAME, keys: [lab.adminKey, technician, viewer] };
   });
