@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { defineConfig } from 'vitest/config';
 
 /** A container engine counts only when testcontainers can reach one (it fails fast otherwise). */
@@ -30,6 +31,8 @@ export default defineConfig({
       { test: { name: 'unit', include: ['tests/src/**/*.test.ts'], testTimeout: 30_000 } },
       integration('api-embedded'),
       ...(serverReachable ? [integration('api-server')] : []),
+      // Browser tests of the lab pages run only where the system Chromium is installed.
+      ...(existsSync('/usr/bin/chromium') ? [{ test: { name: 'e2e', include: ['tests/e2e/**/*.test.ts'], testTimeout: 120_000, hookTimeout: 240_000 } }] : []),
     ],
   },
 });

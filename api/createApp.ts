@@ -10,6 +10,7 @@ import type { AppConfig } from './env.ts';
 import { handleError } from './problem/handleError.ts';
 import { problemResponse } from './problem/problemResponse.ts';
 import { validationHook } from './problem/validationHook.ts';
+import { labPages } from './pages/labPages.tsx';
 import { annealingRoutes } from './routes/annealingRoutes.ts';
 import { analysisRoutes } from './routes/analysisRoutes.ts';
 import { calcRoutes } from './routes/calcRoutes.ts';
@@ -60,5 +61,6 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   calcRoutes(app);
   trendRoutes(app);
   annealingRoutes(app);
+  app.route('/lab', labPages());
   return app;
 }
