@@ -5,6 +5,7 @@ import { readings } from '../../schema/index.ts';
 import type { Actor } from '../Actor.ts';
 import { deriveReadingColumns } from './deriveReadingColumns.ts';
 import { getReading } from './getReading.ts';
+import { refuseImplausibleOrder } from './refuseImplausibleOrder.ts';
 
 /**
  * Records a correction as a new reading that supersedes the old one; the old one stays as it
@@ -21,6 +22,7 @@ export async function amendReading(db: Db, actor: Actor, readingId: string, inpu
         { field: 'readingId', message: `superseded by ${previous.supersededById}` },
       ]);
     }
+    await refuseImplausibleOrder(tx, actor, previous.siteId, columns);
     const [row] = await tx
       .insert(readings)
       .values({

@@ -8,6 +8,7 @@ import { checkImportRows } from './checkImportRows.ts';
 import { insertImportedReadings } from './insertImportedReadings.ts';
 import { parseReadingCsv } from './parseReadingCsv.ts';
 import { parseReadingJson } from './parseReadingJson.ts';
+import { refuseImplausibleImportRows } from './refuseImplausibleImportRows.ts';
 import { resolveImportSites } from './resolveImportSites.ts';
 
 /** Above this many rows the answer leaves the reading ids out; they are reachable by site. */
@@ -61,6 +62,7 @@ export async function importReadings(db: Db, actor: Actor, request: ImportReques
     const parsed = request.format === 'csv' ? parseReadingCsv(request.body) : parseReadingJson(request.body);
     const sites = await resolveImportSites(tx, actor.labId, parsed.candidates.map((c) => c.site));
     const rows = checkImportRows(parsed, sites);
+    await refuseImplausibleImportRows(tx, actor.labId, rows, parsed.fieldOf);
     const [record] = await tx
       .insert(readingImports)
       .values({ labId: actor.labId, format: request.format, rowCount: rows.length, idempotencyKey: request.idempotencyKey ?? null, bodySha256, importedByKeyId: actor.keyId })
