@@ -17,10 +17,12 @@ export interface TableColumn {
  */
 export async function tableColumns(db: Db, table: string): Promise<TableColumn[]> {
   const rows = rowsOf<{ column_name: string; required: boolean }>(
-    await db.execute(sql`select column_name,
-        (is_nullable = 'NO' and column_default is null and is_identity = 'NO' and is_generated = 'NEVER') as required
-      from information_schema.columns
-      where table_schema = current_schema() and table_name = ${table} order by ordinal_position`),
+    // pg_catalog rather than information_schema: the same answer, many times faster on PGlite.
+    await db.execute(sql`select a.attname as column_name,
+        (a.attnotnull and not a.atthasdef and a.attidentity = '' and a.attgenerated = '') as required
+      from pg_attribute a join pg_class c on c.oid = a.attrelid
+      where c.relname = ${table} and c.relnamespace = current_schema()::regnamespace and a.attnum > 0 and not a.attisdropped
+      order by a.attnum`),
   );
   return rows.map((r) => ({ name: r.column_name, required: r.required === true || String(r.required) === 'true' }));
 }
