@@ -79,4 +79,14 @@ describe('lab pages in a browser', () => {
     await shot('05-schedule-print');
     await page.emulateMedia({ media: 'screen' });
   });
+
+  it('shows an oven run with its plan against the oven log', async () => {
+    await page.goto(`${server.baseUrl}/lab`);
+    await page.getByRole('link', { name: 'SN-B1' }).first().click();
+    await page.locator('a[href^="/lab/runs/"]').first().click();
+    await expect.poll(() => page.locator('svg.plot path.measured').count()).toBe(1);
+    expect(await page.locator('svg.plot path.planned').count()).toBe(1);
+    expect(await page.getByRole('heading', { name: /Log comparison/ }).textContent()).toMatch(/passed/);
+    await shot('06-oven-run');
+  });
 });

@@ -3,7 +3,7 @@ import type { AnnealingAdvice } from './loadAnnealingAdvice.ts';
 
 /** The model's plans, and the cycle its guidance gives now when it is not yet fit to test. */
 export function AnnealingSection({ modelId, advice }: { modelId: string; advice: AnnealingAdvice }) {
-  const { current, plans, draft, unavailable } = advice;
+  const { current, plans, runs, draft, unavailable } = advice;
   return (
     <>
       {current ? (
@@ -13,6 +13,9 @@ export function AnnealingSection({ modelId, advice }: { modelId: string; advice:
         </p>
       ) : (
         <p class="note">No annealing plan stored for this model.</p>
+      )}
+      {runs.length > 0 && (
+        <p>Oven runs: {runs.map((r, i) => <>{i > 0 ? ', ' : ''}<a href={`/lab/runs/${r.id}`}>{r.ovenName}, {formatInstant(r.startedAt)}</a></>)}</p>
       )}
       {draft && (
         <div class="card">

@@ -2,6 +2,7 @@ import { DecisionBadge } from '../shell/DecisionBadge.tsx';
 import { formatInstant } from '../shell/formatInstant.ts';
 import { formatMeasured } from '../shell/formatMeasured.ts';
 import { Layout } from '../shell/Layout.tsx';
+import { STAGE_WORDING } from '../shell/stageWording.ts';
 import type { Overview, OverviewModel } from './loadOverview.ts';
 
 const RUN_STATUS = { scheduled: 'Not started yet', in_oven: 'In the oven', awaiting_log: 'Cycle over, oven log not imported' } as const;
@@ -70,7 +71,7 @@ export function OverviewPage({ overview, flash }: { overview: Overview; flash?: 
                   <td>{formatInstant(r.observedAt)}</td>
                   <td><a href={`/lab/models/${r.modelId}`}>{r.modelCode}</a></td>
                   <td>{r.siteLabel}</td>
-                  <td>{r.stage.replace('_', ' ')}</td>
+                  <td>{STAGE_WORDING[r.stage]}</td>
                   <td class="num">{formatMeasured(r.order)}</td>
                   <td><DecisionBadge decision={r.decision} /></td>
                 </tr>

@@ -24,7 +24,7 @@ h3 { font-size: 1.05rem; margin: 18px 0 6px; }
 table { border-collapse: collapse; width: 100%; background: var(--card); }
 th, td { text-align: left; padding: 6px 8px; border-bottom: 1px solid var(--rule); vertical-align: top; }
 th { font-size: .85rem; font-weight: 600; color: var(--muted); }
-td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; }
+td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
 .table-wrap { overflow-x: auto; }
 .badge { display: inline-block; padding: 2px 10px; border-radius: 999px; font-size: .85rem; font-weight: 600; white-space: nowrap; border: 1px solid transparent; }
 .badge-conforming { color: var(--ok); background: var(--ok-bg); border-color: var(--ok); }
