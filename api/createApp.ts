@@ -6,6 +6,7 @@ import { utf8JsonBodies } from './utf8JsonBodies.ts';
 import type { Db } from '../db/Db.ts';
 import type { AppEnv } from './AppEnv.ts';
 import { authenticate } from './auth/authenticate.ts';
+import { failedKeyLimiter } from './auth/failedKeyLimiter.ts';
 import type { AppConfig } from './env.ts';
 import { handleError } from './problem/handleError.ts';
 import { problemResponse } from './problem/problemResponse.ts';
@@ -44,7 +45,7 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
     const maxSize = importPaths.test(c.req.path) ? config.IMPORT_LIMIT_BYTES : config.BODY_LIMIT_BYTES;
     return bodyLimit({ maxSize, onError: () => problemResponse(413, 'payload_too_large', `The body exceeds ${maxSize} bytes.`) })(c, next);
   });
-  app.use('/v1/*', authenticate());
+  app.use('/v1/*', authenticate(failedKeyLimiter({ limit: config.AUTH_FAILURE_LIMIT, windowS: config.AUTH_FAILURE_WINDOW_S })));
   app.use('/v1/*', utf8JsonBodies(importPaths));
   app.use('/v1/*', transactionalWrites());
 

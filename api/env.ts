@@ -13,6 +13,9 @@ const EnvSchema = z.object({
   IMPORT_LIMIT_BYTES: z.coerce.number().int().positive().default(32 * 1_048_576),
   DB_POOL_SIZE: z.coerce.number().int().min(1).max(100).default(10),
   LOAD_DEMO: z.enum(['auto', 'never']).default('auto'),
+  /** Wrong keys one client address may present per window before it gets 429. */
+  AUTH_FAILURE_LIMIT: z.coerce.number().int().min(1).max(100_000).default(20),
+  AUTH_FAILURE_WINDOW_S: z.coerce.number().int().min(1).max(86_400).default(300),
 });
 
 export type AppConfig = z.infer<typeof EnvSchema>;
