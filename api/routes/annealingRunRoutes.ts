@@ -44,7 +44,7 @@ export function annealingRunRoutes(app: OpenAPIHono<AppEnv>): void {
       path: '/v1/annealing/runs/{id}/oven-logs/import',
       tags,
       summary: "Import the oven's log (CSV) and compare it with the plan: pass, pass with remarks, or fail with the reasons",
-      description: 'Columns: one of elapsed_h, elapsed_min or timestamp (ISO 8601 with offset), and temperature_c; others are ignored. All rows or none: bad cells come back as 422 with row and field. A second log for a run names the one it supersedes (supersedesLogId) and why (reason).',
+      description: 'Columns: one of elapsed_h, elapsed_min or timestamp (ISO 8601 with offset), and temperature_c; others are ignored. All rows or none: bad cells come back as 422 with row and field. A second log for a run names the one it supersedes (supersedesLogId) and why (reason). rateWindowH, deviationC, overshootC and soakBandC widen the comparison for a noisy logger; the tolerances used are stored with the comparison.',
       request: { params: IdParam, query: OvenLogImportQuery, body: { required: true, content: { 'text/csv': { schema: { type: 'string' as const, example: 'elapsed_h,temperature_c\n0,23.0\n0.1,25.1\n' } } } } },
       responses: { 201: jsonResponse(OvenLogSchema, 'The stored log and its comparison'), 409: problemResponseSpec('The run already has a current log, or the named log was superseded'), 415: problemResponseSpec('Not text/csv') },
     }),
@@ -52,7 +52,9 @@ export function annealingRunRoutes(app: OpenAPIHono<AppEnv>): void {
       const type = (c.req.header('content-type') ?? '').toLowerCase();
       if (!type.startsWith('text/csv')) throw new HTTPException(415, { message: `Send the oven log as text/csv, not "${type || 'no content type'}".` });
       const body = new Uint8Array(await c.req.arrayBuffer());
-      return c.json(toJson(await importOvenLog(c.var.db, c.var.actor, c.req.valid('param').id, { body, ...c.req.valid('query') })) as never, 201);
+      const { supersedesLogId, reason, ...given } = c.req.valid('query');
+      const tolerances = Object.fromEntries(Object.entries(given).filter(([, v]) => v !== undefined));
+      return c.json(toJson(await importOvenLog(c.var.db, c.var.actor, c.req.valid('param').id, { body, supersedesLogId, reason, tolerances })) as never, 201);
     },
   );
   app.openapi(

@@ -90,8 +90,18 @@ export const RunListQuery = z.object({
 });
 export type RunListQuery = z.infer<typeof RunListQuery>;
 
+// Comparison tolerances a lab may widen for its own oven and logger (defaults in compareOvenLog).
+const tolerance = (max: number) => z.coerce.number().positive().max(max).optional();
+
 export const OvenLogImportQuery = z
-  .object({ supersedesLogId: z.uuid().optional(), reason: reason.optional() })
+  .object({
+    supersedesLogId: z.uuid().optional(),
+    reason: reason.optional(),
+    rateWindowH: tolerance(6),
+    deviationC: tolerance(50),
+    overshootC: tolerance(50),
+    soakBandC: tolerance(50),
+  })
   .superRefine((q, ctx) => {
     if ((q.supersedesLogId === undefined) !== (q.reason === undefined)) {
       ctx.addIssue({ code: 'custom', path: ['reason'], message: 'a log that supersedes another states why, and a reason needs the log it supersedes' });

@@ -43,6 +43,17 @@ describe('annealing runs and oven logs', () => {
       expect((await lab.viewer.get(`/v1/annealing/runs/${run.id}`)).body.currentLog).toMatchObject({ id: reply.body.id, verdict: 'pass' });
     }));
 
+  it('lets a lab widen the rate window for a noisy logger, and stores the tolerances used', () =>
+    inLab(async (lab) => {
+      const { plan, run } = await plannedRun(lab);
+      // 0.3 °C noise every 15 s: end-to-end rates over 0.5 h scatter by about ±0.85 °C/h, past the soak's 2 °C/h allowance now and then.
+      const noisy = ovenLogCsv(plan.plan.segments, { stepH: 0.004, noiseC: 0.3, stream: 11 });
+      const reply = await importOvenLog(lab.technician, run.id, noisy, '?rateWindowH=2');
+      expect(reply.status).toBe(201);
+      expect(reply.body.comparison.tolerances.rateWindowH).toBe(2);
+      expect(reply.body.verdict).toBe('pass');
+    }));
+
   it('fails a log with an overshoot during the soak and says so; a corrected log supersedes it with a reason', () =>
     inLab(async (lab) => {
       const { plan, run } = await plannedRun(lab);

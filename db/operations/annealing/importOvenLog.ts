@@ -1,5 +1,6 @@
 import { createHash } from 'node:crypto';
 import { compareOvenLog } from '../../../src/annealing/compareOvenLog.ts';
+import type { OvenLogTolerances } from '../../../src/annealing/OvenLogComparison.ts';
 import { DomainError } from '../../../src/errors/DomainError.ts';
 import type { Db } from '../../Db.ts';
 import { ovenLogs } from '../../schema/index.ts';
@@ -18,6 +19,7 @@ export interface OvenLogImport {
   body: Uint8Array;
   supersedesLogId?: string | undefined;
   reason?: string | undefined;
+  tolerances?: Partial<OvenLogTolerances>;
 }
 
 /**
@@ -38,7 +40,7 @@ export async function importOvenLog(db: Db, actor: Actor, runId: string, input: 
     }
     const plan = await getPlan(tx, actor, run.planId);
     const samples = parsed.elapsedH.map((elapsedH, i) => ({ elapsedH, temperatureC: parsed.temperatureC[i]! }));
-    const { elapsedH: _e, expectedC: _x, ...comparison } = compareOvenLog(plan.plan, samples);
+    const { elapsedH: _e, expectedC: _x, ...comparison } = compareOvenLog(plan.plan, samples, input.tolerances);
     const notes: string[] = [];
     const firstAt = parsed.observedAt[0];
     if (firstAt && Math.abs(firstAt.getTime() - run.startedAt.getTime()) > START_MISMATCH_H * 3_600_000) {
