@@ -8,7 +8,8 @@ import { KNOWN_COLUMNS, NUMERIC_COLUMNS, REQUIRED_COLUMNS } from './readingTrans
 const snake = (key: PropertyKey) => String(key).replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const NUMERIC: ReadonlySet<string> = new Set(NUMERIC_COLUMNS);
-const METHOD_INPUTS = { whole_order: 'wholeOrder', lower_order: 'lowerOrder', analyzer_rotation_deg: 'analyzerRotationDeg', moved_fringe: 'movedFringe' } as const;
+const METHOD_INPUTS = { whole_order: 'wholeOrder', lower_order: 'lowerOrder', analyzer_rotation_deg: 'analyzerRotationDeg', moved_fringe: 'movedFringe', srgb_hex: 'srgbHex', named_colour: 'namedColour', illuminant: 'illuminant' } as const;
+const TEXT_INPUTS: ReadonlySet<string> = new Set(['moved_fringe', 'srgb_hex', 'named_colour', 'illuminant']);
 
 /** A zod path of CreateReadingInput as the CSV names it: `reading` alone is the method column. */
 function fieldOf(path: readonly PropertyKey[]): string {
@@ -59,18 +60,20 @@ function candidateOf(row: number, cells: Map<string, string>, problems: FieldPro
   const method = text('method');
   const reading: Record<string, unknown> = { method };
   for (const [column, key] of Object.entries(METHOD_INPUTS)) {
-    const value = key === 'movedFringe' ? text(column) : num(column);
+    const value = TEXT_INPUTS.has(column) ? text(column) : num(column);
     if (value !== undefined) reading[key] = value;
   }
-  // fringe_order and retardation_nm are raw inputs of one method each; on other rows an export
-  // wrote the derived value there, which is then checked rather than read.
+  // fringe_order and retardation_nm are raw inputs of one method each (a white-light colour may be
+  // given as a point on the scale, in nm); on other rows an export wrote the derived value
+  // there, which is then checked rather than read.
   const fringeOrder = num('fringe_order');
   const retardationNm = num('retardation_nm');
+  const retardationIsInput = method === 'compensator' || (method === 'white_light_colour' && reading.srgbHex === undefined && reading.namedColour === undefined);
   if (method === 'direct' && fringeOrder !== undefined) reading.fringeOrder = fringeOrder;
-  if (method === 'compensator' && retardationNm !== undefined) reading.retardationNm = retardationNm;
+  if (retardationIsInput && retardationNm !== undefined) reading.retardationNm = retardationNm;
   const echo = {
     ...(method !== 'direct' && fringeOrder !== undefined ? { fringeOrder } : {}),
-    ...(method !== 'compensator' && retardationNm !== undefined ? { retardationNm } : {}),
+    ...(!retardationIsInput && retardationNm !== undefined ? { retardationNm } : {}),
   };
   const site = readSiteReference(row, { siteId: text('site_id'), modelCode: text('model_code'), siteLabel: text('site_label') }, fieldOf);
   problems.push(...site.problems);
