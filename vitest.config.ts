@@ -31,6 +31,10 @@ export default defineConfig({
       { test: { name: 'unit', include: ['tests/src/**/*.test.ts'], testTimeout: 30_000 } },
       integration('api-embedded'),
       ...(serverReachable ? [integration('api-server')] : []),
+      // Faults start the real service as a child process against databases of their own on the
+      // server, so they need TEST_DATABASE_URL; they take minutes, so npm run bench:faults runs
+      // them (RUN_FAULTS) and npm test does not. One file at a time keeps their timing honest.
+      ...(process.env.TEST_DATABASE_URL && process.env.RUN_FAULTS ? [{ test: { name: 'faults', include: ['tests/faults/**/*.test.ts'], testTimeout: 120_000, hookTimeout: 120_000, fileParallelism: false } }] : []),
       // Browser tests of the lab pages run only where the system Chromium is installed.
       ...(existsSync('/usr/bin/chromium') ? [{ test: { name: 'e2e', include: ['tests/e2e/**/*.test.ts'], testTimeout: 120_000, hookTimeout: 240_000 } }] : []),
     ],
