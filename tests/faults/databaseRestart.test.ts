@@ -29,7 +29,7 @@ describe('the database restarting under the running service', () => {
   it('answers 503 with Retry-After while it is down, and serves again after, in the same process', async () => {
     expect((await admin.get('/v1/whoami')).status).toBe(200);
     cluster.stop();
-    for (const attempt of [() => admin.get('/v1/models'), () => admin.post(`/v1/sites/${siteId}/readings`, reading), () => admin.get('/v1/whoami')]) {
+    for (const attempt of [() => admin.get('/v1/models'), () => admin.post(`/v1/sites/${siteId}/readings`, reading), () => admin.get(`/v1/sites/${siteId}`)]) {
       const reply = await attempt();
       expect(reply.status, reply.text).toBe(503);
       expect(reply.body.code).toBe('unavailable');
