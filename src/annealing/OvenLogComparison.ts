@@ -8,7 +8,7 @@ export interface OvenLogSample {
 export interface OvenLogTolerances {
   /** Largest |measured − planned| before it is remarked on, °C. */
   deviationC: number;
-  /** Window over which the rolling ramp rate is taken, h, so sample noise does not read as rate. */
+  /** Window over which the rolling ramp rate is fitted (least-squares slope), h, so sample noise does not read as rate. */
   rateWindowH: number;
   /** Slack on a planned rate: allowed = planned·(1 + fraction) + absolute. */
   rateToleranceCPerH: number;

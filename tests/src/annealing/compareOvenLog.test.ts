@@ -4,6 +4,7 @@ import { CAST_ACRYLIC_GUIDANCE } from '../../../src/annealing/castAcrylicGuidanc
 import { compareOvenLog } from '../../../src/annealing/compareOvenLog.ts';
 import { generateAnnealingPlan } from '../../../src/annealing/generateAnnealingPlan.ts';
 import { POLYCARBONATE_ZAKERI_2013 } from '../../../src/annealing/polycarbonateGuidance.ts';
+import { rollingRateCPerH } from '../../../src/annealing/rollingRateCPerH.ts';
 import { syntheticOvenLog } from './syntheticOvenLog.ts';
 
 // Invented cycle: a 12 mm cast acrylic model. Plan: 23→80 °C at 14 °C/h (4.07 h), soak 12 h
@@ -89,6 +90,50 @@ describe('compareOvenLog on synthetic logs with planted faults (repeatable noise
   it('remarks on a log that stops before the plan ends', () => {
     const log = syntheticOvenLog(plan.segments, { stepH: minute, noiseC: 0.15, stream: 7 }).filter((s) => s.elapsedH! < 18);
     expect(kinds(compareOvenLog(plan, log))).toEqual(['log_ends_early']);
+  });
+});
+
+describe('compareOvenLog on a noisy logger (σ 0.3 °C, a sample every 15 s)', () => {
+  const quarterMinute = 15 / 3600;
+  const zakeri = generateAnnealingPlan({ guidance: POLYCARBONATE_ZAKERI_2013, maxSectionThicknessMm: 6 });
+
+  it('finds no rate excursion on clean logs, though their two-end-sample rates would cross a soak\'s 2 °C/h', () => {
+    for (const p of [plan, zakeri]) {
+      for (const stream of [41, 42, 43, 44]) {
+        const log = syntheticOvenLog(p.segments, { stepH: quarterMinute, noiseC: 0.3, stream });
+        const r = compareOvenLog(p, log);
+        expect(r.findings).toEqual([]);
+        expect(r.verdict).toBe('pass');
+        // The same windows read end to end scatter by σ√2/0.5 h ≈ 0.85 °C/h [C], and somewhere in
+        // a soak pass its 2 °C/h allowance: the test would catch a return to that estimate.
+        const { windowStart } = rollingRateCPerH(r.elapsedH, log.map((s) => s.temperatureC), 0.5);
+        let worstInSoakCPerH = 0;
+        for (const s of p.segments.filter((seg) => seg.kind === 'soak')) {
+          r.elapsedH.forEach((t, i) => {
+            const j = windowStart[i]!;
+            if (j < 0 || r.elapsedH[j]! < s.startH || t > s.startH + s.durationH) return;
+            worstInSoakCPerH = Math.max(worstInSoakCPerH, Math.abs(log[i]!.temperatureC - log[j]!.temperatureC) / (t - r.elapsedH[j]!));
+          });
+        }
+        expect(worstInSoakCPerH).toBeGreaterThan(2);
+      }
+    }
+  });
+
+  it('still finds a too-fast cool (16 °C/h where 10.3 °C/h is planned, allowed 13.3) as one fault', () => {
+    const log = syntheticOvenLog(plan.segments, {
+      stepH: quarterMinute, noiseC: 0.3, stream: 45,
+      shape: (t, c) => (t > coolStartH ? Math.max(80 - 16 * (t - coolStartH), 49) : c),
+    });
+    const r = compareOvenLog(plan, log);
+    const fast = r.findings.filter((f) => f.kind === 'rate_exceeded');
+    expect(fast).toHaveLength(1);
+    expect(fast[0]).toMatchObject({ severity: 'fault', numbers: { plannedRateCPerH: 10.3 } });
+    // The fitted slope's scatter is σ/√Σ(t − t̄)² ≈ 0.19 °C/h for 121 samples over 0.5 h [C].
+    expect(Math.abs(fast[0]!.numbers.peakRateCPerH! + 16)).toBeLessThan(1);
+    expect(fast[0]!.atH).toBeGreaterThanOrEqual(coolStartH - 0.5);
+    expect(fast[0]!.untilH).toBeLessThanOrEqual(coolStartH + 31 / 16 + 0.5);
+    expect(r.verdict).toBe('fail');
   });
 });
 
