@@ -46,9 +46,11 @@ describe('annealing runs and oven logs', () => {
   it('lets a lab widen the rate window for a noisy logger, and stores the tolerances used', () =>
     inLab(async (lab) => {
       const { plan, run } = await plannedRun(lab);
-      // 0.3 °C noise every 15 s: end-to-end rates over 0.5 h scatter by about ±0.85 °C/h, past the soak's 2 °C/h allowance now and then.
+      // 0.3 °C noise every 15 s passes on the default 0.5 h slope window too; a lab may still ask for a longer one.
       const noisy = ovenLogCsv(plan.plan.segments, { stepH: 0.004, noiseC: 0.3, stream: 11 });
-      const reply = await importOvenLog(lab.technician, run.id, noisy, '?rateWindowH=2');
+      expect((await importOvenLog(lab.technician, run.id, noisy)).body.verdict).toBe('pass');
+      const { run: second } = await plannedRun(lab);
+      const reply = await importOvenLog(lab.technician, second.id, noisy, '?rateWindowH=2');
       expect(reply.status).toBe(201);
       expect(reply.body.comparison.tolerances.rateWindowH).toBe(2);
       expect(reply.body.verdict).toBe('pass');
