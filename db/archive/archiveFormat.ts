@@ -7,7 +7,7 @@ export const ARCHIVE_FORMAT = 'fringe-ledger-lab-archive';
 export const ARCHIVE_FORMAT_VERSION = 1;
 
 /** Rows per keyset page on export and per bulk statement on import. */
-export const ARCHIVE_PAGE_ROWS = 2000;
+export const ARCHIVE_PAGE_ROWS = 5000;
 
 /** A line longer than this is not one of ours; refusing it keeps junk from filling memory. */
 export const ARCHIVE_MAX_LINE_CHARS = 16 * 1024 * 1024;

@@ -25,9 +25,15 @@ export async function readArchivePage(db: Db, table: ArchiveTable, where: SQL, a
     ? sql` and (${keyList}) > (${sql.join(after.map((v, i) => sql`${v}::${sql.raw(table.key[i]!.sqlType)}`), sql`, `)})`
     : sql``;
   const selectKeys = sql.join(table.key.map((k, i) => sql`t.${sql.identifier(k.name)} as ${sql.identifier(`k${i}`)}`), sql`, `);
+  const joinKeys = sql.join(table.key.map((k, i) => sql`t.${sql.identifier(k.name)} = page.${sql.identifier(`k${i}`)}`), sql` and `);
+  // Keys first, rows after: should the planner sort instead of walking the key index, it sorts
+  // only the keys and builds the JSON for one page, not for every remaining row of the lab.
   const rows = rowsOf<Record<string, unknown> & { line: string }>(
-    await db.execute(sql`select (to_jsonb(t) - 'lab_id')::text as line, ${selectKeys}
-      from ${sql.identifier(table.name)} t where ${where}${cursor} order by ${keyList} limit ${limit}`),
+    await db.execute(sql`with page as (
+        select ${selectKeys} from ${sql.identifier(table.name)} t where ${where}${cursor} order by ${keyList} limit ${limit}
+      )
+      select (to_jsonb(t) - 'lab_id')::text as line, page.* from page join ${sql.identifier(table.name)} t on ${joinKeys}
+      order by ${sql.join(table.key.map((_, i) => sql`page.${sql.identifier(`k${i}`)}`), sql`, `)}`),
   );
   const lastRow = rows.at(-1);
   return { lines: rows.map((r) => r.line), last: lastRow && table.key.map((_, i) => lastRow[`k${i}`]) };

@@ -107,7 +107,7 @@ describe('lab archive refusals', () => {
           '{"key": "archive-test.shared-cycle", "title": "Shared test cycle", "peakTemperatureC": 140}')`);
       const summary = await importLabArchive(tx, { newLab: true }, chunksOf(demo.bytes));
       expect(summary.repointedSharedReferences).toBe(3);
-      const plans = rowsOf<{ g: string }>(await tx.execute(sql`select distinct guidance_entry_id::text as g from annealing_plans where lab_id = ${summary.labId}::uuid`));
+      const plans = rowsOf<{ g: string }>(await tx.execute(sql`select distinct guidance_entry_id::text as g from annealing_plans where lab_id = ${summary.labId}::uuid and guidance_key = 'archive-test.shared-cycle'`));
       expect(plans).toEqual([{ g: shared!.id }]);
       const copies = rowsOf<{ n: number }>(await tx.execute(sql`select count(*)::int as n from annealing_guidance_entries where key = 'archive-test.shared-cycle'`));
       expect(copies[0]!.n).toBe(1);
