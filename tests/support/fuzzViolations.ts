@@ -57,12 +57,13 @@ function numberViolations(s: JsonSchema, base: Json): [string, fc.Arbitrary<Json
   const ceiling = max ?? exclusiveMax;
   const floor = min ?? exclusiveMin;
   if (ceiling !== undefined) {
-    out.push(['above maximum', fc.double({ min: ceiling, minExcluded: max !== undefined, max: Number.MAX_VALUE, noNaN: true })]);
+    // Filtered as well: the generator's own edge values (such as -0) can sit on the bound.
+    out.push(['above maximum', fc.double({ min: ceiling, minExcluded: max !== undefined, max: Number.MAX_VALUE, noNaN: true }).filter((x) => (max !== undefined ? x > max : x >= ceiling))]);
     out.push(['huge number', fc.constantFrom(1e308, 2 ** 53 + 2, 1e21)]);
     if (typeof base === 'number' && base * 1000 > ceiling) out.push(['unit mistake ×1000', fc.constant(base * 1000)]);
   }
   if (floor !== undefined) {
-    out.push(['below minimum', fc.double({ max: floor, maxExcluded: min !== undefined, min: -Number.MAX_VALUE, noNaN: true })]);
+    out.push(['below minimum', fc.double({ max: floor, maxExcluded: min !== undefined, min: -Number.MAX_VALUE, noNaN: true }).filter((x) => (min !== undefined ? x < min : x <= floor))]);
     if (typeof base === 'number' && base > 0 && base / 1000 < floor) out.push(['unit mistake ÷1000', fc.constant(base / 1000)]);
   }
   return out;
@@ -105,7 +106,7 @@ export function violationsOf(schema: JsonSchema, base: Json, resolve: (s: JsonSc
     const properties = s.properties ?? {};
     for (const key of s.required ?? []) out.push({ path: [...path, key], kind: 'missing required', value: fc.constant(REMOVED) });
     if (s.additionalProperties === false) {
-      const unknownKey = fc.oneof(fc.string({ minLength: 1, maxLength: 10 }), fc.constantFrom('__proto__', 'constructor', 'labId', 'id', 'recordedByKeyId'));
+      const unknownKey = fc.oneof(fc.string({ minLength: 1, maxLength: 10 }), fc.constantFrom('__proto__', 'constructor', 'labId', 'recordedByKeyId', 'supersededById'));
       out.push({ path, kind: 'unknown key', value: unknownKey.filter((k) => !(k in properties)).chain((k) => fc.jsonValue({ maxDepth: 1 }).map((v) => ({ ...base, [k]: v as Json }))) });
     } else if (typeof s.additionalProperties === 'object') {
       out.push(...violationsOf(s.additionalProperties, validValue(s.additionalProperties, resolve, ids), resolve, ids, [...path, 'fuzzKey'], depth + 1));
