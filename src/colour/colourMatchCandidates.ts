@@ -73,8 +73,8 @@ export function colourMatchCandidates(
   const best = candidates[0]!;
   const rivals = candidates.filter((c) => c.deltaE2000! <= best.deltaE2000! + threshold);
   const notes: string[] = [];
-  const atEnd = basins.slice(0, maxCandidates).find((b) => b.to === last);
-  if (atEnd) notes.push(`a match range reaches the end of the search at ${searchMaxNm} nm; higher orders were not searched`);
+  // Only a match (within the threshold of the best) makes the unsearched orders matter.
+  if (rivals.some((c) => c.rangeNm.to === nm(last))) notes.push(`a match range reaches the end of the search at ${searchMaxNm} nm; higher orders were not searched`);
   if (best.deltaE2000! > threshold) {
     notes.push(`best match ΔE00 ${best.deltaE2000!.toFixed(1)} exceeds the threshold ${threshold}: the colour is not on the modelled sequence (lamp, camera or exposure may differ)`);
   }
