@@ -14,7 +14,7 @@ import { inLab } from '../support/inLab.ts';
 const BODY_LIMIT_BYTES = 8192;
 const IMPORT_LIMIT_BYTES = 65_536;
 // The embedded database answers each request several times slower; fewer runs keep it under a minute.
-const RUNS_PER_ROUTE = Number(process.env.FUZZ_RUNS_PER_ROUTE ?? (inject('serverDatabaseUrl') ? 120 : 45));
+const RUNS_PER_ROUTE = Number(process.env.FUZZ_RUNS_PER_ROUTE ?? (inject('serverDatabaseUrl') ? 120 : 100));
 // Export columns an import ignores: left out of the base file so every changed cell is one it reads.
 const OUTPUT_ONLY = ['id', 'fringe_order_uncertainty', 'supersedes_id', 'amendment_reason', 'recorded_at'];
 const OUTPUT_ONLY_JSON = ['id', 'fringeOrderUncertainty', 'supersedesId', 'amendmentReason', 'recordedAt'];
