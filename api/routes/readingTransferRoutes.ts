@@ -6,6 +6,7 @@ import { importReadings } from '../../db/operations/readings/importReadings.ts';
 import { readingExportText } from '../../db/operations/readings/readingExportText.ts';
 import type { AppEnv } from '../AppEnv.ts';
 import { problemResponseSpec } from '../schemas/problemSchema.ts';
+import { ReadingImportRowSchema } from '../schemas/readingImportRowSchema.ts';
 import { EXPORT_DESCRIPTION, IMPORT_DESCRIPTION } from './readingTransferDocs.ts';
 import { jsonResponse } from './routeParts.ts';
 import { secureRoute } from './secureRoute.ts';
@@ -28,7 +29,7 @@ const importBody = {
   required: true,
   content: {
     'text/csv': { schema: { type: 'string' as const } },
-    'application/json': { schema: { type: 'object' as const, required: ['readings'], properties: { readings: { type: 'array' as const, items: { $ref: '#/components/schemas/ReadingInput' } } } } },
+    'application/json': { schema: { type: 'object' as const, required: ['readings'], properties: { readings: { type: 'array' as const, items: { $ref: '#/components/schemas/ReadingImportRow' } } } } },
   },
 };
 
@@ -44,6 +45,7 @@ function formatOf(contentType: string | undefined): 'csv' | 'json' {
 }
 
 export function readingTransferRoutes(app: OpenAPIHono<AppEnv>): void {
+  app.openAPIRegistry.register('ReadingImportRow', ReadingImportRowSchema);
   app.openapi(
     secureRoute('technician', {
       method: 'post',

@@ -1,0 +1,26 @@
+import { z } from '@hono/zod-openapi';
+import { CreateReadingInput } from '../../db/inputs/readings.ts';
+
+const ignored = (what: string) => ({ description: `written by an export; ignored on import (${what})` });
+
+/**
+ * One row of a JSON import as documented: a reading's inputs, its site by id or by model code
+ * and site label, and the keys an export writes beside them, so an export imports as it is.
+ * The import reads the bytes itself (for the idempotency digest); this schema documents them.
+ */
+export const ReadingImportRowSchema = z
+  .object({
+    ...CreateReadingInput.shape,
+    modelCode: z.string().max(60).optional(),
+    siteLabel: z.string().max(60).optional(),
+    siteId: z.uuid().optional(),
+    fringeOrder: z.number().optional().openapi({ description: 'if given, must agree with the value derived from the raw inputs' }),
+    retardationNm: z.number().optional().openapi({ description: 'if given, must agree with the value derived from the raw inputs' }),
+    id: z.unknown().optional().openapi(ignored('the exported reading\'s id')),
+    fringeOrderUncertainty: z.unknown().optional().openapi(ignored('derived')),
+    supersedesId: z.unknown().optional().openapi(ignored('amendment links are not rebuilt')),
+    amendmentReason: z.unknown().optional().openapi(ignored('amendment links are not rebuilt')),
+    recordedAt: z.unknown().optional().openapi(ignored('the import records its own time')),
+  })
+  .strict()
+  .openapi('ReadingImportRow');
