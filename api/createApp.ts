@@ -35,9 +35,11 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
   app.onError(handleError);
   app.notFound((c) => problemResponse(404, 'not_found', `No route ${c.req.method} ${c.req.path}.`));
   app.use('*', secureHeaders());
+  const keyLimiter = failedKeyLimiter({ limit: config.AUTH_FAILURE_LIMIT, windowS: config.AUTH_FAILURE_WINDOW_S });
   app.use('*', async (c, next) => {
     c.set('db', db);
     c.set('config', config);
+    c.set('keyLimiter', keyLimiter);
     await next();
   });
   const importPaths = /\/import$/;
@@ -45,7 +47,7 @@ export function createApp({ db, config }: AppDependencies): OpenAPIHono<AppEnv> 
     const maxSize = importPaths.test(c.req.path) ? config.IMPORT_LIMIT_BYTES : config.BODY_LIMIT_BYTES;
     return bodyLimit({ maxSize, onError: () => problemResponse(413, 'payload_too_large', `The body exceeds ${maxSize} bytes.`) })(c, next);
   });
-  app.use('/v1/*', authenticate(failedKeyLimiter({ limit: config.AUTH_FAILURE_LIMIT, windowS: config.AUTH_FAILURE_WINDOW_S })));
+  app.use('/v1/*', authenticate(keyLimiter));
   app.use('/v1/*', utf8JsonBodies(importPaths));
   app.use('/v1/*', transactionalWrites());
 

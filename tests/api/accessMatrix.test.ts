@@ -96,6 +96,20 @@ describe('access matrix over the route table', () => {
       { AUTH_FAILURE_LIMIT: 5, AUTH_FAILURE_WINDOW_S: 2 },
     ));
 
+  it('counts wrong keys at the pages\' sign-in against the same limit as the API', () =>
+    inLab(
+      async ({ app, viewer }) => {
+        const signIn = (key: string) =>
+          app.request('/lab/sign-in', { method: 'POST', headers: { 'content-type': 'application/x-www-form-urlencoded', origin: 'http://localhost' }, body: `key=${encodeURIComponent(key)}` });
+        for (let i = 0; i < 3; i++) expect((await signIn('flk_guess')).status).toBe(401);
+        const limited = await signIn('flk_guess');
+        expect(limited.status).toBe(429);
+        expect(Number(limited.headers.get('retry-after'))).toBeGreaterThanOrEqual(1);
+        expect((await viewer.get('/v1/whoami')).status).toBe(429);
+      },
+      { AUTH_FAILURE_LIMIT: 3, AUTH_FAILURE_WINDOW_S: 60 },
+    ));
+
   it('sends the security headers on pages, API answers and refusals', () =>
     inLab(async ({ anonymous, viewer }) => {
       const paths = ['/docs', '/lab', '/openapi.json', '/v1/whoami'];

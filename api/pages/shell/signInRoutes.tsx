@@ -1,6 +1,7 @@
 import type { Hono } from 'hono';
 import { deleteCookie, setCookie } from 'hono/cookie';
 import { findActorByKey } from '../../../db/operations/keys/findActorByKey.ts';
+import { clientAddress } from '../../auth/clientAddress.ts';
 import type { AppEnv } from '../../AppEnv.ts';
 import { SESSION_COOKIE } from '../../auth/authenticate.ts';
 import { Layout } from './Layout.tsx';
@@ -38,7 +39,14 @@ export function signInRoutes(app: Hono<AppEnv>): void {
     const form = await c.req.parseBody();
     const key = typeof form.key === 'string' ? form.key.trim() : '';
     const next = safeNextPath(typeof form.next === 'string' ? form.next : undefined);
+    const address = clientAddress(c);
+    const waitS = c.var.keyLimiter.retryAfterS(address);
+    if (waitS > 0) {
+      c.header('retry-after', String(waitS));
+      return c.html(<SignInPage next={next} problem={`Too many wrong keys from this address; try again in ${waitS} s.`} />, 429);
+    }
     const actor = key && key.length <= 200 ? await findActorByKey(c.var.db, key) : undefined;
+    if (key && !actor) c.var.keyLimiter.recordFailure(address);
     if (!actor) return c.html(<SignInPage next={next} problem="That key is not one of a lab here, or it was revoked." />, 401);
     setCookie(c, SESSION_COOKIE, key, {
       httpOnly: true,
