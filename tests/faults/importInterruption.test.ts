@@ -90,7 +90,7 @@ describe('a bulk import interrupted part-way', () => {
     if (!(failed instanceof Error)) expect(failed.headers['retry-after']).toBeDefined();
     expect(await counts()).toEqual(before);
     // postgres.js 3.4.9 then writes the rollback to the socket it has closed, which ends the
-    // process (porsager/postgres#1154, unfixed upstream); a supervisor restarts it.
+    // process (porsager/postgres issues #1133 and #1208, open upstream); a supervisor restarts it.
     const ended = await Promise.race([server.exited, new Promise((resolve) => setTimeout(() => resolve('running'), 1500))]);
     if (ended !== 'running') {
       expect(server.output()).toMatch(/Cannot read properties of null \(reading 'write'\)/);
