@@ -15,12 +15,12 @@ export interface Client {
   send(method: string, path: string, init?: { body?: BodyInit; headers?: Record<string, string> }): Promise<Reply>;
 }
 
-/** In-process requests through app.request, authenticated with one key (or none). */
-export function clientFor(app: ReturnType<typeof createApp>, key: string | undefined): Client {
+/** A Client over any request function: in-process (app.request) or real HTTP (fetch). */
+export function clientOver(request: (path: string, init: RequestInit) => Response | Promise<Response>, key: string | undefined): Client {
   const send: Client['send'] = async (method, path, init = {}) => {
     const headers: Record<string, string> = { ...(key ? { authorization: `Bearer ${key}` } : {}), ...init.headers };
     const withBody = init.body !== undefined && method !== 'GET' && method !== 'HEAD';
-    const res = await app.request(path, { method, headers, ...(withBody ? { body: init.body } : {}) });
+    const res = await request(path, { method, headers, ...(withBody ? { body: init.body } : {}) });
     const text = await res.text();
     let body: unknown;
     try {
@@ -36,4 +36,9 @@ export function clientFor(app: ReturnType<typeof createApp>, key: string | undef
     post: (path, body, headers = {}) =>
       send('POST', path, body === undefined ? { headers } : { body: JSON.stringify(body), headers: { 'content-type': 'application/json', ...headers } }),
   };
+}
+
+/** In-process requests through app.request, authenticated with one key (or none). */
+export function clientFor(app: ReturnType<typeof createApp>, key: string | undefined): Client {
+  return clientOver((path, init) => app.request(path, init), key);
 }
