@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
 
-/** An invented lab history large enough to stress the trend queries; deterministic per seed. */
+/** An invented lab history large enough to stress the trend queries; deterministic per random start. */
 export interface HistoryPlan {
   batches: number;
   modelsPerBatch: number;
   /** Every site gets this many readings. */
   readingsPerSite: number;
-  seed: number;
+  randomStart: number;
 }
 
 export interface BenchModel {
@@ -58,9 +58,9 @@ const TEST_STAGES = [
   { stage: 'after_anneal', afterH: 1100 },
 ] as const;
 
-/** mulberry32: a small seeded generator, so two runs build the same lab. */
-function random(seed: number): () => number {
-  let a = seed >>> 0;
+/** mulberry32: a small repeatable generator, so two runs build the same lab. */
+function random(start: number): () => number {
+  let a = start >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;
     let t = a;
@@ -76,7 +76,7 @@ export const batchCode = (i: number) => `BX-${String(i + 1).padStart(2, '0')}`;
 export const BAD_BATCH = 6;
 
 export function planModels(plan: HistoryPlan): { models: BenchModel[]; sites: BenchSite[] } {
-  const next = random(plan.seed);
+  const next = random(plan.randomStart);
   const models: BenchModel[] = [];
   const total = plan.batches * plan.modelsPerBatch;
   for (let b = 0; b < plan.batches; b++) {
@@ -124,7 +124,7 @@ export function siteReadings(site: BenchSite, plan: HistoryPlan, next: () => num
 
 /** All readings of all sites, in chunks of about chunkRows so callers can stream them. */
 export function* readingChunks(sites: readonly BenchSite[], plan: HistoryPlan, chunkRows: number): Generator<BenchReading[]> {
-  const next = random(plan.seed + 1);
+  const next = random(plan.randomStart + 1);
   let chunk: BenchReading[] = [];
   for (const site of sites) {
     chunk.push(...siteReadings(site, plan, next));

@@ -19,7 +19,7 @@ import { measureThroughput } from './throughput.ts';
 
 // Sizes can be lowered for a quick trial (BENCH_MODELS=500); the defaults are the figures reported.
 const models = Number(process.env.BENCH_MODELS ?? 10_000);
-const plan: HistoryPlan = { batches: 20, modelsPerBatch: Math.ceil(models / 20), readingsPerSite: 25, seed: 20_261_201 };
+const plan: HistoryPlan = { batches: 20, modelsPerBatch: Math.ceil(models / 20), readingsPerSite: 25, randomStart: 20_261_201 };
 const baseUrl = process.env.BENCH_DATABASE_URL ?? 'postgres://postgres@127.0.0.1:5432/postgres';
 const CHUNK_ROWS = 50_000;
 const RUNS = Number(process.env.BENCH_RUNS ?? 15);

@@ -68,7 +68,7 @@ export async function buildTrendLab(admin: Client, make: Factories) {
             reading: { method: 'direct', fringeOrder: slip ? order + 0.5 : order },
           });
           if (slip) {
-            // A transcription slip, corrected by an amendment: only the amendment is current.
+            // A copying slip, corrected by an amendment: only the amendment is current.
             await posted(admin, `/v1/readings/${reading.id}/amendments`, {
               stage: 'before_load', observedAt, operator, wavelengthNm: 577, reading: { method: 'direct', fringeOrder: order }, reason: 'decimal slip in the notebook',
             });

@@ -35,7 +35,7 @@ describe('assessFitnessToTest', () => {
     expect(fraction?.evaluated && fraction.judged.uncertainty).toBeCloseTo(Math.hypot(0.02 / 6, (0.02 * 0.17) / 6), 12);
   });
 
-  it('fraction uncertainty agrees with a seeded Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
+  it('fraction uncertainty agrees with a repeatable Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
     const r = assessFitnessToTest({ residualOrder: m(0.3, 0.02), testFringeOrder: m(6.0, 0.17), criteria: { maxResidualFractionOfTestOrder: 0.1 } });
     const mc = monteCarlo([m(0.3, 0.02), m(6.0, 0.17)], (a, b) => a / b);
     const c = r.criteria[0];

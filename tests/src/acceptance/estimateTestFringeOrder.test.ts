@@ -21,7 +21,7 @@ describe('estimateTestFringeOrder', () => {
     expect((r.testFringeOrder.value * 10.9) / 4.8).toBeCloseTo(r.rootStressMPa.value, 10);
   });
 
-  it('uncertainty of N_test (thickness cancels) matches a seeded Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
+  it('uncertainty of N_test (thickness cancels) matches a repeatable Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
     const inputs = { plannedLoadN: m(400, 8), netWidthMm: m(20, 0.05), thicknessMm: m(6, 0.1), kt: m(2.1, 0.05), fringeValueNPerMm: m(7, 0.2) };
     const r = estimateTestFringeOrder(inputs);
     const mc = monteCarlo(

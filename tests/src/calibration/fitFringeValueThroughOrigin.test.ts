@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { createRequire } from 'node:module';
 import { standardDeviation } from 'simple-statistics';
 import { fitFringeValueThroughOrigin } from '../../../src/calibration/fitFringeValueThroughOrigin.ts';
-import { seededNormal } from '../uncertainty/support/monteCarlo.ts';
+import { repeatableNormal } from '../uncertainty/support/monteCarlo.ts';
 
 // jstat ships no types; only its least-squares solver is used here, as an outside reference.
 const jStat = createRequire(import.meta.url)('jstat') as { lstsq(a: number[][], b: number[][]): number[][] };
@@ -33,7 +33,7 @@ describe('fitFringeValueThroughOrigin', () => {
   it('reports an uncertainty that matches the scatter of repeated simulated calibrations [C]', () => {
     // 4000 simulated series of 5 load steps with q = 11·N + noise(0.3): the spread of fitted
     // slopes must match the root-mean-square of the reported u(fσ) (E[s²] = σ², unbiased).
-    const noise = seededNormal(4242);
+    const noise = repeatableNormal(4242);
     const xs = [1, 2, 3, 4, 5];
     const slopes: number[] = [];
     let meanUSquared = 0;

@@ -34,7 +34,7 @@ describe('fringeValueFromBeam', () => {
     for (const f of fs) expect(f).toBeCloseTo(11, 10);
   });
 
-  it('counts u(h) twice (h²), agreeing with a seeded Monte Carlo [M: GUM-S1]', () => {
+  it('counts u(h) twice (h²), agreeing with a repeatable Monte Carlo [M: GUM-S1]', () => {
     const input = { bendingMomentNmm: m(4000, 20), depthMm: m(12, 0.05), fringeOrder: m(3.2, 0.02), wavelengthNm: 546.1 };
     const r = fringeValueFromBeam(input);
     if (!r.defined) throw new Error('expected a defined calibration');

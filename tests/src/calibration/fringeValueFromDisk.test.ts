@@ -32,7 +32,7 @@ describe('fringeValueFromDisk', () => {
     expect(r.defined && r.fringeValueNPerMm.value).toBeCloseTo(f, 10);
   });
 
-  it('propagates u(P), u(D), u(N), agreeing with a seeded Monte Carlo [M: GUM-S1]', () => {
+  it('propagates u(P), u(D), u(N), agreeing with a repeatable Monte Carlo [M: GUM-S1]', () => {
     const input = { loadN: m(1200, 6), diameterMm: m(50, 0.02), fringeOrder: m(5.5, 0.02), wavelengthNm: 577 };
     const r = fringeValueFromDisk(input);
     if (!r.defined) throw new Error('expected a defined calibration');

@@ -14,7 +14,7 @@ describe('measuredStressConcentration', () => {
     expect(r.kt.uncertainty).toBeCloseTo(2.16 * Math.hypot(0.15 / 9.6, 4 / 800, 0.02 / 30, 0.02 / 6), 12);
   });
 
-  it('agrees with a seeded Monte Carlo on u(Kt) [M: GUM-S1]', () => {
+  it('agrees with a repeatable Monte Carlo on u(Kt) [M: GUM-S1]', () => {
     const r = measuredStressConcentration(root, load, width, thick);
     if (!r.defined) throw new Error('expected defined');
     const mc = monteCarlo([root, load, width, thick], (s, p, w, t) => (s * w * t) / p);

@@ -12,7 +12,7 @@ describe('birefringenceFromRetardation', () => {
   it('reads a nm-per-cm figure (ISO 10110 classes [M]) as Δn: 10 nm/cm = 1e-6 [C]', () => {
     expect(birefringenceFromRetardation({ value: 10, uncertainty: 0 }, { value: 10, uncertainty: 0 }).birefringence.value).toBeCloseTo(1e-6, 15);
   });
-  it('agrees with a seeded Monte Carlo on the uncertainty [M: GUM-S1]', () => {
+  it('agrees with a repeatable Monte Carlo on the uncertainty [M: GUM-S1]', () => {
     const d = { value: 300, uncertainty: 6 };
     const t = { value: 3, uncertainty: 0.06 };
     const mc = monteCarlo([d, t], (a, b) => (a * 1e-6) / b);

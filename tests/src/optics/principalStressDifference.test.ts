@@ -22,7 +22,7 @@ describe('principalStressDifference', () => {
     expect(principalStressDifference(exact(3), exact(11), exact(6.35)).stressDifferenceMPa.value).toBeCloseTo(5.1969, 4);
   });
 
-  it('propagates u(N), u(fσ), u(t) by first-order GUM, agreeing with a seeded Monte Carlo [M: GUM, GUM-S1]', () => {
+  it('propagates u(N), u(fσ), u(t) by first-order GUM, agreeing with a repeatable Monte Carlo [M: GUM, GUM-S1]', () => {
     const n = { value: 2.5, uncertainty: 0.02 };
     const f = { value: 7.0, uncertainty: 0.2 };
     const t = { value: 6.0, uncertainty: 0.05 };

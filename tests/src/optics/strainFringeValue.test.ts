@@ -14,7 +14,7 @@ describe('strainFringeValue', () => {
     const fe = strainFringeValue({ value: f, uncertainty: 0 }, { value: e, uncertainty: 0 }, { value: nu, uncertainty: 0 }).strainFringeValueMmPerFringe.value;
     expect((e * (n * fe / t)) / (1 + nu)).toBeCloseTo((n * f) / t, 12);
   });
-  it('agrees with a seeded Monte Carlo on the uncertainty [M: GUM-S1]', () => {
+  it('agrees with a repeatable Monte Carlo on the uncertainty [M: GUM-S1]', () => {
     const f = { value: 7.0, uncertainty: 0.2 }, e = { value: 2400, uncertainty: 100 }, nu = { value: 0.37, uncertainty: 0.01 };
     const mc = monteCarlo([f, e, nu], (a, b, c) => (a * (1 + c)) / b);
     const u = strainFringeValue(f, e, nu).strainFringeValueMmPerFringe.uncertainty;

@@ -40,7 +40,7 @@ describe('analyseSiteStages', () => {
     expect(r.annealRelief).toBeUndefined();
   });
 
-  it('inelastic fraction uncertainty through the whole analysis matches a seeded Monte Carlo within 3 %', () => {
+  it('inelastic fraction uncertainty through the whole analysis matches a repeatable Monte Carlo within 3 %', () => {
     const r = analyseSiteStages(signedHistory);
     const mc = monteCarlo([m(0.3, 0.02), m(2.4, 0.02), m(0.45, 0.02)], (f, l, p) => (p - f) / (l - f));
     expect(r.inelasticFractionOfPeak?.defined).toBe(true);

@@ -10,7 +10,7 @@ describe('differenceOfOrders', () => {
     expect(d.value).toBeCloseTo(0.15, 12);
     expect(d.uncertainty).toBeCloseTo(0.02 * Math.SQRT2, 12);
   });
-  it('agrees with a seeded Monte Carlo for independent readings', () => {
+  it('agrees with a repeatable Monte Carlo for independent readings', () => {
     const a = { value: 2.4, uncertainty: 0.03 };
     const b = { value: -0.3, uncertainty: 0.05 };
     const mc = monteCarlo([a, b], (x, y) => x - y);

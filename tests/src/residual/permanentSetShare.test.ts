@@ -29,7 +29,7 @@ describe('permanentSetShare', () => {
     ['sign reversal', 0.3, -0.2],
     ['relaxation', 0.5, 0.35],
     ['negative residual grows', -0.4, -0.7],
-  ])('%s: GUM partial derivatives match a seeded Monte Carlo within 3 % [M: GUM Supplement 1 method]', (_label, f, p) => {
+  ])('%s: GUM partial derivatives match a repeatable Monte Carlo within 3 % [M: GUM Supplement 1 method]', (_label, f, p) => {
     const fab = m(f, 0.005);
     const post = m(p, 0.005);
     const mc = monteCarlo([fab, post], shareOf);

@@ -25,7 +25,7 @@ describe('ratioOrUndefined', () => {
     expect(r.defined && r.ratio.uncertainty).toBeCloseTo(direct, 12);
   });
 
-  it('inelastic fraction: GUM with the shared N_fab matches a seeded Monte Carlo of the stage readings within 3 % [M: GUM Supplement 1 method]', () => {
+  it('inelastic fraction: GUM with the shared N_fab matches a repeatable Monte Carlo of the stage readings within 3 % [M: GUM Supplement 1 method]', () => {
     const fab = { value: 0.3, uncertainty: 0.02 };
     const load = { value: 2.4, uncertainty: 0.03 };
     const post = { value: 0.55, uncertainty: 0.02 };
@@ -46,7 +46,7 @@ describe('ratioOrUndefined', () => {
     expect(naive.defined && relErr(mc.uncertainty, naive.ratio.uncertainty)).toBeGreaterThan(0.05);
   });
 
-  it('anneal relief (pre − post)/pre with cov = u(pre)²: matches a seeded Monte Carlo within 3 %', () => {
+  it('anneal relief (pre − post)/pre with cov = u(pre)²: matches a repeatable Monte Carlo within 3 %', () => {
     const pre = { value: 0.4, uncertainty: 0.01 };
     const post = { value: 0.05, uncertainty: 0.01 };
     const mc = monteCarlo([pre, post], (a, b) => (a - b) / a);

@@ -37,7 +37,7 @@ describe('stressFromOrder', () => {
     expect(r.stressMPa.uncertainty).toBeCloseTo((7 / 6) * 0.02, 12);
   });
 
-  it('first-order uncertainty agrees with a seeded Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
+  it('first-order uncertainty agrees with a repeatable Monte Carlo within 2 % [M: GUM Supplement 1 method]', () => {
     const n = { value: 2.5, uncertainty: 0.02 };
     const mc = monteCarlo([n, f, t], (a, b, c) => (a * b) / c);
     const r = stressFromOrder(n, f, t, true);

@@ -25,7 +25,7 @@ describe('propagatePowerProduct', () => {
     );
   });
 
-  it('agrees with a seeded Monte Carlo for the disk formula 8P/(πDN) [M: GUM-S1]', () => {
+  it('agrees with a repeatable Monte Carlo for the disk formula 8P/(πDN) [M: GUM-S1]', () => {
     const p = { value: 1200, uncertainty: 12 }, d = { value: 50, uncertainty: 0.05 }, n = { value: 5.5, uncertainty: 0.05 };
     const y = propagatePowerProduct(8 / Math.PI, [
       { field: 'P', measured: p, exponent: 1 },

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { errorFunction } from 'simple-statistics';
-import { monteCarlo, seededUniform } from './monteCarlo.ts';
+import { monteCarlo, repeatableUniform } from './monteCarlo.ts';
 
 describe('monteCarlo test support', () => {
   it('reproduces the sum of two normals, u = √(u1² + u2²) [M: standard result]', () => {
@@ -10,7 +10,7 @@ describe('monteCarlo test support', () => {
   });
   it('draws normals: the share within ±1.96 u matches erf(1.96/√2) from simple-statistics [reference library]', () => {
     const expected = errorFunction(1.96 / Math.SQRT2);
-    const u = seededUniform(7);
+    const u = repeatableUniform(7);
     let inside = 0;
     const n = 100_000;
     for (let i = 0; i < n; i++) {
@@ -19,9 +19,9 @@ describe('monteCarlo test support', () => {
     }
     expect(inside / n).toBeCloseTo(expected, 2);
   });
-  it('is repeatable for one seed', () => {
-    const a = seededUniform(42);
-    const b = seededUniform(42);
+  it('is repeatable for one starting value', () => {
+    const a = repeatableUniform(42);
+    const b = repeatableUniform(42);
     expect([a(), a(), a()]).toEqual([b(), b(), b()]);
   });
 });

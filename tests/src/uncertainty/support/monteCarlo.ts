@@ -2,12 +2,12 @@ import { mean, standardDeviation } from 'simple-statistics';
 import type { Measured } from '../../../../src/uncertainty/Measured.ts';
 
 // Test-only reference: an independent Monte Carlo propagation (GUM Supplement 1 style, from
-// memory [M]) with a seeded generator, so the first-order formulas are checked against
+// memory [M]) with a repeatable generator, so the first-order formulas are checked against
 // something that never differentiates.
 
-/** mulberry32: a small, well-known 32-bit seeded generator; uniform on (0, 1). */
-export function seededUniform(seed: number): () => number {
-  let a = seed >>> 0;
+/** mulberry32: a small, well-known 32-bit repeatable generator; uniform on (0, 1). */
+export function repeatableUniform(start: number): () => number {
+  let a = start >>> 0;
   return () => {
     a = (a + 0x6d2b79f5) >>> 0;
     let t = a;
@@ -17,9 +17,9 @@ export function seededUniform(seed: number): () => number {
   };
 }
 
-/** Box–Muller normal draws from a seeded uniform source. */
-export function seededNormal(seed: number): (m: Measured) => number {
-  const u = seededUniform(seed);
+/** Box–Muller normal draws from a repeatable uniform source. */
+export function repeatableNormal(start: number): (m: Measured) => number {
+  const u = repeatableUniform(start);
   return (m) => m.value + m.uncertainty * Math.sqrt(-2 * Math.log(u())) * Math.cos(2 * Math.PI * u());
 }
 
@@ -27,9 +27,9 @@ export function seededNormal(seed: number): (m: Measured) => number {
 export function monteCarlo(
   inputs: readonly Measured[],
   f: (...xs: number[]) => number,
-  { draws = 200_000, seed = 20240611 } = {},
+  { draws = 200_000, start = 20240611 } = {},
 ): Measured {
-  const draw = seededNormal(seed);
+  const draw = repeatableNormal(start);
   const out = new Float64Array(draws);
   for (let i = 0; i < draws; i++) out[i] = f(...inputs.map(draw));
   const samples = Array.from(out);
