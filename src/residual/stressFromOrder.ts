@@ -1,14 +1,12 @@
 import { requireNumber } from '../guards/requireNumber.ts';
-import { combinedStandardUncertainty } from '../uncertainty/combinedStandardUncertainty.ts';
-import { requireMeasured } from '../uncertainty/requireMeasured.ts';
+import { principalStressDifference } from '../optics/principalStressDifference.ts';
 import type { Measured } from '../uncertainty/Measured.ts';
 import type { StressFromOrder } from './SiteStagesTypes.ts';
 
 /**
- * Stress-optic law σ1 − σ2 = N·fσ/t, with first-order (GUM) uncertainty from u(N), u(fσ),
- * u(t) taken as independent. fσ in N/mm per fringe over t in mm gives N/mm² = MPa. At a free
- * edge σ2 = 0, so the result is the edge stress itself; elsewhere it is only the principal
- * stress difference. Absolute sensitivities are used so that N = 0 still carries u(N).
+ * The stress-optic law (src/optics/principalStressDifference) labelled for a site: at a free
+ * edge σ2 = 0, so N·fσ/t is the edge stress itself; elsewhere only the principal stress
+ * difference. An uncertainty that overflows is refused, like the value.
  *
  * @example
  * stressFromOrder({ value: 2.5, uncertainty: 0.02 }, { value: 7.0, uncertainty: 0.2 },
@@ -21,17 +19,9 @@ export function stressFromOrder(
   thicknessMm: Measured,
   onFreeEdge: boolean,
 ): StressFromOrder {
-  const n = requireMeasured('order', order);
-  const f = requireMeasured('fringeValueNPerMm', fringeValueNPerMm, { above: 0 });
-  const t = requireMeasured('thicknessMm', thicknessMm, { above: 0 });
-  const value = (n.value * f.value) / t.value;
-  const uncertainty = combinedStandardUncertainty([
-    { sensitivity: f.value / t.value, uncertainty: n.uncertainty },
-    { sensitivity: n.value / t.value, uncertainty: f.uncertainty },
-    { sensitivity: -value / t.value, uncertainty: t.uncertainty },
-  ]);
+  const { stressDifferenceMPa } = principalStressDifference(order, fringeValueNPerMm, thicknessMm);
   return {
-    stressMPa: { value: requireNumber('stressMPa', value), uncertainty: requireNumber('stressMPa uncertainty', uncertainty) },
+    stressMPa: { value: stressDifferenceMPa.value, uncertainty: requireNumber('stressMPa uncertainty', stressDifferenceMPa.uncertainty) },
     kind: onFreeEdge ? 'edge_stress' : 'principal_stress_difference',
   };
 }
