@@ -120,6 +120,20 @@ describe('importing readings from a CSV file', () => {
       expect(reply.body.readingIds).toBeUndefined();
       expect((await storedCounts(db, labId)).readings).toBe(4500);
     }));
+
+  it('refuses a large file for a problem in its last chunk and keeps none of the chunks already inserted', () =>
+    inLab(async ({ db, labId, technician, make }) => {
+      await modelWithSites(make, 'UN-10', ['edge']);
+      const before = await storedCounts(db, labId);
+      const line = (i: number, order: string) => `UN-10,edge,before_load,,2026-11-21T14:05:${String(i % 60).padStart(2, '0')}Z,R. Okafor,577,whole_order,${order},,,,,,unknown,`;
+      const lines = Array.from({ length: 9000 }, (_, i) => line(i, String(i % 7)));
+      lines[8800] = line(8800, '"2,5"');
+      const reply = await postCsv(technician, csvOf([HEADER, ...lines]));
+      expect(reply.status, reply.text.slice(0, 500)).toBe(422);
+      // Row numbers count the header as row 1.
+      expect(reply.body.errors).toEqual([expect.objectContaining({ row: 8802, field: 'whole_order' })]);
+      expect(await storedCounts(db, labId)).toEqual(before);
+    }));
 });
 
 describe('importing readings from JSON, idempotency and content types', () => {

@@ -4,11 +4,11 @@ import { DomainError } from '../../../src/errors/DomainError.ts';
 import type { Db } from '../../Db.ts';
 import { readingImports } from '../../schema/index.ts';
 import type { Actor } from '../Actor.ts';
-import { checkImportRows } from './checkImportRows.ts';
-import { insertImportedReadings } from './insertImportedReadings.ts';
+import { checkAndInsertRows } from './checkAndInsertRows.ts';
 import { parseReadingCsv } from './parseReadingCsv.ts';
 import { parseReadingJson } from './parseReadingJson.ts';
-import { refuseImplausibleImportRows } from './refuseImplausibleImportRows.ts';
+import { readPlausibilityContexts } from './readPlausibilityContexts.ts';
+import { refuseImportProblems } from './refuseImportProblems.ts';
 import { resolveImportSites } from './resolveImportSites.ts';
 
 /** Above this many rows the answer leaves the reading ids out; they are reachable by site. */
@@ -42,8 +42,9 @@ async function replayed(db: Db, actor: Actor, key: string, bodySha256: string): 
 }
 
 /**
- * Imports a whole file of readings or none of it: every row is validated and every site resolved
- * before anything is written, then all rows go in with their import record in one transaction.
+ * Imports a whole file of readings or none of it, in one transaction: every site is resolved in
+ * one query, rows are checked and inserted chunk by chunk, and any problem anywhere refuses the
+ * file with all its problems listed and rolls back what went in.
  * A repeated Idempotency-Key with the same body answers the first import again.
  *
  * @example
@@ -61,18 +62,19 @@ export async function importReadings(db: Db, actor: Actor, request: ImportReques
     }
     const parsed = request.format === 'csv' ? parseReadingCsv(request.body) : parseReadingJson(request.body);
     const sites = await resolveImportSites(tx, actor.labId, parsed.candidates.map((c) => c.site));
-    const rows = checkImportRows(parsed, sites);
-    await refuseImplausibleImportRows(tx, actor.labId, rows, parsed.fieldOf);
+    const contexts = await readPlausibilityContexts(tx, actor.labId, [...new Set(sites.values())]);
     const [record] = await tx
       .insert(readingImports)
-      .values({ labId: actor.labId, format: request.format, rowCount: rows.length, idempotencyKey: request.idempotencyKey ?? null, bodySha256, importedByKeyId: actor.keyId })
+      .values({ labId: actor.labId, format: request.format, rowCount: parsed.candidates.length, idempotencyKey: request.idempotencyKey ?? null, bodySha256, importedByKeyId: actor.keyId })
       .returning({ id: readingImports.id });
-    const readingIds = await insertImportedReadings(tx, actor, record!.id, rows);
+    const outcome = await checkAndInsertRows(tx, actor, record!.id, parsed, sites, contexts);
+    refuseImportProblems(outcome);
+    const { readingIds } = outcome;
     return {
       importId: record!.id,
-      rowCount: rows.length,
+      rowCount: readingIds.length,
       format: request.format,
-      ...(rows.length <= MAX_LISTED_READING_IDS ? { readingIds } : {}),
+      ...(readingIds.length <= MAX_LISTED_READING_IDS ? { readingIds } : {}),
       replayed: false,
     };
   });

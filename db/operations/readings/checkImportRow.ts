@@ -5,7 +5,6 @@ import { deriveReadingColumns } from './deriveReadingColumns.ts';
 import type { ImportCandidate, ParsedImport } from './ParsedImport.ts';
 import { siteKeyOf } from './siteKeyOf.ts';
 
-const MAX_LISTED_PROBLEMS = 200;
 const MAX_FRINGE_ORDER = 200;
 
 export interface CheckedRow {
@@ -33,7 +32,12 @@ function echoProblems(candidate: ImportCandidate, columns: CheckedRow['columns']
   });
 }
 
-function checkOne(candidate: ImportCandidate, sites: Map<string, string>, fieldOf: ParsedImport['fieldOf']): { row?: CheckedRow; problems: FieldProblem[] } {
+/**
+ * Validates one row with the same rules as a single reading: its site must exist, its cells
+ * must pass CreateReadingInput, the core must derive a fringe order from them, and the values an
+ * export echoes must agree with that derivation. Returns the row to store or its problems.
+ */
+export function checkImportRow(candidate: ImportCandidate, sites: ReadonlyMap<string, string>, fieldOf: ParsedImport['fieldOf']): { row?: CheckedRow; problems: FieldProblem[] } {
   const { row } = candidate;
   const problems: FieldProblem[] = [];
   const siteId = candidate.site && sites.get(siteKeyOf(candidate.site));
@@ -55,31 +59,4 @@ function checkOne(candidate: ImportCandidate, sites: Map<string, string>, fieldO
   if (columns.fringeOrder > MAX_FRINGE_ORDER) problems.push({ row, field: fieldOf(['reading']), message: `gives fringe order ${columns.fringeOrder}, above ${MAX_FRINGE_ORDER}` });
   problems.push(...echoProblems(candidate, columns, fieldOf));
   return problems.length > 0 || !siteId ? { problems } : { row: { row, siteId, columns }, problems };
-}
-
-/**
- * Validates every row with the same rules as a single reading and collects every problem, so
- * a user fixes the whole sheet in one pass. Any problem refuses the file as a whole.
- */
-export function checkImportRows(parsed: ParsedImport, sites: Map<string, string>): CheckedRow[] {
-  const problems = [...parsed.problems];
-  const rows: CheckedRow[] = [];
-  for (const candidate of parsed.candidates) {
-    const result = checkOne(candidate, sites, parsed.fieldOf);
-    problems.push(...result.problems);
-    if (result.row) rows.push(result.row);
-  }
-  if (problems.length === 0 && rows.length === 0) {
-    throw new DomainError('invalid_input', 'The file has no readings. Nothing was imported.', [{ field: 'file', message: 'no readings' }]);
-  }
-  if (problems.length === 0) return rows;
-  // A cell that is not a number also fails the schema; the cell's own message is the useful one.
-  const seen = new Set<string>();
-  const unique = problems.filter((p) => !seen.has(`${p.row}|${p.field}`) && Boolean(seen.add(`${p.row}|${p.field}`)));
-  unique.sort((a, b) => (a.row ?? 0) - (b.row ?? 0));
-  const listed = unique.slice(0, MAX_LISTED_PROBLEMS);
-  const more = unique.length - listed.length;
-  if (more > 0) listed.push({ field: 'file', message: `and ${more} more problems not listed` });
-  const badRows = new Set(unique.map((p) => p.row)).size;
-  throw new DomainError('invalid_input', `${unique.length} problem${unique.length === 1 ? '' : 's'} in ${badRows} row${badRows === 1 ? '' : 's'}; nothing was imported.`, listed);
 }
