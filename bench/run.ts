@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import postgres from 'postgres';
 import { createApp } from '../api/createApp.ts';
 import { defaultConfig } from '../api/env.ts';
@@ -10,7 +11,7 @@ import { compareUnitsSql } from '../db/operations/trends/compareTrendGroups.ts';
 import { edgeAgingPointsSql, storedModelsSql } from '../db/operations/trends/edgeAgingSql.ts';
 import { batchSeriesSql } from '../db/operations/trends/readControlChart.ts';
 import { residualSummarySql } from '../db/operations/trends/residualSummarySql.ts';
-import { copyBody, csvBody, measureCopy, measureImport } from './importRate.ts';
+import { type CopyOrigin, copyBody, csvBody, measureCopy, measureImport } from './importRate.ts';
 import { BAD_BATCH, batchCode, type HistoryPlan, planModels, readingChunks } from './labHistory.ts';
 import { type LatencyCase, measureLatency } from './latency.ts';
 import { loadStructure } from './loadStructure.ts';
@@ -43,14 +44,16 @@ try {
 
   const csv: string[] = [];
   const copy: string[] = [];
+  const origins: CopyOrigin[] = [];
   let rows = 0;
   for (const chunk of readingChunks(sites, plan, CHUNK_ROWS)) {
     csv.push(csvBody(chunk));
-    copy.push(copyBody(chunk, lab.labId));
+    origins.push({ labId: lab.labId, importId: randomUUID(), keyId: technician.id });
+    copy.push(copyBody(chunk, origins[origins.length - 1]!));
     rows += chunk.length;
   }
   log(`generated ${rows} readings in ${csv.length} files`);
-  const copyRate = await measureCopy(raw, copy, rows);
+  const copyRate = await measureCopy(raw, origins, copy, rows);
   log(`COPY: ${copyRate.rowsPerSecond.toFixed(0)} rows/s (rolled back)`);
   const app = createApp({ db: handle.db, config: defaultConfig() });
   const importRate = await measureImport(app, technician.secret, csv, rows);
@@ -73,7 +76,10 @@ try {
   const latency = await measureLatency(app, technician.secret, raw, cases, RUNS);
   log('latency measured');
   const [site] = await raw<{ id: string }[]>`select id from sites where lab_id = ${lab.labId} limit 1`;
-  const throughput = await measureThroughput(app, technician.secret, `/v1/sites/${site!.id}`, 20_000, 20_000);
+  // As many connections as the service's pool, so only the service's own work differs.
+  const reader = postgres(url.toString(), { max: 10, onnotice: () => {} });
+  const sameQuery = async () => (await reader`select * from sites where id = ${site!.id} and lab_id = ${lab.labId}`)[0];
+  const throughput = await measureThroughput(app, technician.secret, `/v1/sites/${site!.id}`, sameQuery, 20_000, 20_000).finally(() => reader.end({ timeout: 5 }));
   const [versions] = await raw<{ version: string }[]>`select current_setting('server_version') as version`;
   printReport({ rows, models: modelList.length, sites: sites.length, copyRate, importRate, latency, throughput, nodeVersion: process.version, postgresVersion: versions!.version });
 } finally {
