@@ -1,11 +1,11 @@
-import { analyseModelResiduals } from '../../../db/operations/analysis/analyseModelResiduals.ts';
+import { analyseManyModelsResiduals } from '../../../db/operations/analysis/analyseManyModelsResiduals.ts';
 import type { Actor } from '../../../db/operations/Actor.ts';
 import { listModels } from '../../../db/operations/models/listModels.ts';
 import type { Db } from '../../../db/Db.ts';
 import type { DecisionName } from '../shell/DecisionBadge.tsx';
 import { loadRunsInOven } from './loadRunsInOven.ts';
 
-/** Models judged per page: each one is a full residual analysis. */
+/** Models judged per page, all in one batched residual analysis. */
 export const MODELS_PER_PAGE = 40;
 const RECENT_READINGS = 12;
 
@@ -36,13 +36,13 @@ export async function loadOverview(db: Db, actor: Actor, cursor: string | undefi
   const page = await listModels(db, actor, { limit: MODELS_PER_PAGE, cursor });
   const models: OverviewModel[] = [];
   const recent: RecentReading[] = [];
-  // One at a time: the embedded database has one connection and each analysis is several queries.
-  for (const m of page.items) {
-    const analysis = await analyseModelResiduals(db, actor, m.id);
+  const analyses = await analyseManyModelsResiduals(db, actor, page.items.map((m) => m.id));
+  for (const analysis of analyses) {
+    const m = analysis.model;
     models.push({
       id: m.id,
       code: m.code,
-      materialName: analysis.model.materialName,
+      materialName: m.materialName,
       decision: analysis.decision,
       siteCount: analysis.sites.length,
       sitesOver: analysis.sites.filter((s) => s.decision === 'needs_annealing').map((s) => s.label),

@@ -1,26 +1,8 @@
-import { and, asc, eq, inArray, notExists } from 'drizzle-orm';
-import { alias } from 'drizzle-orm/pg-core';
-import { COMMON_PRACTICE_FITNESS_CRITERIA } from '../../../src/acceptance/commonPracticeFitnessCriteria.ts';
-import { assessSiteResidual } from '../../../src/acceptance/assessSiteResidual.ts';
-import type { FitnessCriteria } from '../../../src/acceptance/FitnessTypes.ts';
-import { fringeValueForBatch } from '../../../src/calibration/fringeValueForBatch.ts';
-import { resolveWavelengthNm } from '../../../src/optics/resolveWavelengthNm.ts';
+import { DomainError } from '../../../src/errors/DomainError.ts';
 import type { Db } from '../../Db.ts';
-import { calibrations, readings, sites } from '../../schema/index.ts';
 import type { Actor } from '../Actor.ts';
-import { getModelDetail } from '../models/getModelDetail.ts';
-import { criteriaInForce } from './criteriaInForce.ts';
-
-const RANK = { needs_annealing: 3, undecided: 2, conforming: 1, no_readings: 0 } as const;
-
-function limitsOf(row: Awaited<ReturnType<typeof criteriaInForce>>) {
-  if (!row) return { source: 'common_practice' as const, flag: COMMON_PRACTICE_FITNESS_CRITERIA.flag, criteria: { ...COMMON_PRACTICE_FITNESS_CRITERIA.usual } as FitnessCriteria, coverageFactor: 2, plannedLoadN: null, criteriaId: null };
-  const criteria: FitnessCriteria = {};
-  if (row.maxResidualFringeOrder !== null) criteria.maxResidualFringeOrder = row.maxResidualFringeOrder;
-  if (row.maxResidualStressMPa !== null) criteria.maxResidualStressMPa = row.maxResidualStressMPa;
-  if (row.maxResidualFractionOfTestOrder !== null) criteria.maxResidualFractionOfTestOrder = row.maxResidualFractionOfTestOrder;
-  return { source: row.modelId ? ('model' as const) : ('project' as const), flag: null, criteria, coverageFactor: row.coverageFactor, plannedLoadN: row.plannedLoadN, criteriaId: row.id };
-}
+import { composeResidualAnalysis } from './composeResidualAnalysis.ts';
+import { readAnalysisInputs } from './readAnalysisInputs.ts';
 
 /**
  * The residual analysis of a model: the fringe value in use, the limits in force, and per
@@ -28,52 +10,7 @@ function limitsOf(row: Awaited<ReturnType<typeof criteriaInForce>>) {
  * site's. Only current readings count (an amended reading is replaced by its amendment).
  */
 export async function analyseModelResiduals(db: Db, actor: Actor, modelId: string) {
-  const detail = await getModelDetail(db, actor, modelId);
-  const { model, material } = detail;
-  const successor = alias(readings, 'successor');
-  const [batchCalibrations, siteReadings, criteriaRow] = await Promise.all([
-    db.select().from(calibrations).where(eq(calibrations.batchId, model.batchId)).orderBy(asc(calibrations.observedAt)),
-    detail.sites.length === 0
-      ? Promise.resolve([])
-      : db
-          .select()
-          .from(readings)
-          .where(and(inArray(readings.siteId, detail.sites.map((s) => s.id)), notExists(db.select({ one: successor.id }).from(successor).where(eq(successor.supersedesId, readings.id)))))
-          .orderBy(asc(readings.observedAt)),
-    criteriaInForce(db, actor.labId, model.id, model.project),
-  ]);
-  const referenceWavelengthNm = material.fringeValueWavelengthNm;
-  const fringeValue = fringeValueForBatch(
-    batchCalibrations.map((c) => ({ fringeOrder: (c.rawInputs as { fringeOrder: { value: number } }).fringeOrder.value, fringeValueNPerMm: { value: c.fringeValueNPerMm, uncertainty: c.fringeValueUncertaintyNPerMm }, wavelengthNm: c.wavelengthNm })),
-    { fringeValueNPerMm: { value: material.fringeValueNPerMm, uncertainty: material.fringeValueUncertaintyNPerMm }, wavelengthNm: material.fringeValueWavelengthNm },
-    referenceWavelengthNm,
-  );
-  const limits = limitsOf(criteriaRow);
-  const siteResults = detail.sites.map((site: typeof sites.$inferSelect) => {
-    const thicknessMm = { value: site.localThicknessMm ?? model.thicknessMm, uncertainty: model.thicknessUncertaintyMm };
-    const assessment = assessSiteResidual({
-      readings: siteReadings.filter((r) => r.siteId === site.id).map((r) => ({ ...r, wavelengthNm: resolveWavelengthNm({ wavelengthNm: r.wavelengthNm }) })),
-      fringeValueNPerMm: fringeValue.fringeValueNPerMm,
-      referenceWavelengthNm,
-      thicknessMm,
-      onFreeEdge: site.onFreeEdge,
-      geometry: model,
-      criteria: limits.criteria,
-      coverageFactor: limits.coverageFactor,
-      plannedLoadN: limits.plannedLoadN,
-    });
-    return { siteId: site.id, label: site.label, kind: site.kind, onFreeEdge: site.onFreeEdge, thicknessMm, ...assessment };
-  });
-  const worst = siteResults.reduce<keyof typeof RANK>((w, s) => (RANK[s.decision] > RANK[w] ? s.decision : w), 'no_readings');
-  return {
-    model: { id: model.id, code: model.code, geometryKind: model.geometryKind, thicknessMm: model.thicknessMm, batchId: model.batchId, materialName: material.name },
-    fringeValue,
-    limits,
-    decision: worst,
-    sites: siteResults,
-    notes: [
-      `fringe orders are expressed at ${referenceWavelengthNm} nm, the wavelength of the fringe value in use`,
-      'the model\'s decision is that of its worst site; a site is judged on its latest reading taken without load',
-    ],
-  };
+  const inputs = (await readAnalysisInputs(db, actor, [modelId])).get(modelId);
+  if (!inputs) throw new DomainError('not_found', `No model ${modelId} in this lab.`);
+  return composeResidualAnalysis(inputs);
 }
