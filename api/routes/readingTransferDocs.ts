@@ -29,8 +29,12 @@ header is row 1, the first reading row 2; column order is free):
 | notes | free text |
 
 Columns an export adds (id, fringe_order_uncertainty, supersedes_id, amendment_reason, recorded_at)
-are accepted and ignored, so an export can be imported again; a re-imported reading is a new
-original record. Cells with text where a number belongs, unknown or repeated columns, a missing
+are accepted, so an export can be imported again; a re-imported reading is a new record with a new
+id. A row whose supersedes_id is the id of another row of the same file (an export with
+includeSuperseded=true) becomes the amendment of that row's new reading, with its
+amendment_reason, so the superseded reading stays superseded; such a link must stay at one site,
+carry a reason, and give each reading at most one successor. A supersedes_id naming no row of the
+file is dropped (the row is imported as an original). Cells with text where a number belongs, unknown or repeated columns, a missing
 required column, or a row with a different number of cells than the header are refused.
 
 Example:
@@ -42,7 +46,8 @@ UN-07,upper notch root,under_load,450,2026-11-21T14:20:00Z,R. Okafor,577,whole_o
 \`\`\`
 
 **JSON** (\`Content-Type: application/json\`): \`{ "readings": [ ... ] }\`, each item a ReadingInput
-plus modelCode and siteLabel (or siteId); rows are counted from 1 in array order.
+plus modelCode and siteLabel (or siteId); rows are counted from 1 in array order. An export's id,
+supersedesId and amendmentReason rebuild amendments as for CSV.
 
 Any other content type answers 415. An optional \`Idempotency-Key\` header (up to 200 characters)
 makes a retry safe: the same key with the same body answers the first import (200, replayed) and

@@ -98,6 +98,35 @@ describe('exporting readings', () => {
       }
     }));
 
+  it('round-trips superseded readings with their amendments when the export includes them', () =>
+    inLab(async ({ technician, viewer, make, otherLab }) => {
+      const { original, amended } = await recordedLab(technician, make);
+      const csv = (await viewer.get('/v1/readings/export?format=csv&includeSuperseded=true')).text;
+      const json = (await viewer.get('/v1/readings/export?format=json&includeSuperseded=true')).body;
+      expect(json.readings).toHaveLength(7);
+      for (const [format, send] of [
+        ['csv', (c: Client) => postCsv(c, csv)],
+        ['json', (c: Client) => c.post('/v1/readings/import', json)],
+      ] as const) {
+        const other = await otherLab();
+        const { sites } = await modelWithSites(factoriesFor(other.admin), 'UN-07', ['upper notch root', 'lower notch root']);
+        const imported = await send(other.admin);
+        expect(imported.status, `${format}: ${imported.text}`).toBe(201);
+        expect(imported.body.rowCount).toBe(7);
+        const back = rowsOf((await other.admin.get('/v1/readings/export?includeSuperseded=true')).text);
+        const correction = back.find((r) => r.analyzer_rotation_deg === '72')!;
+        const first = back.find((r) => r.analyzer_rotation_deg === '27')!;
+        expect(correction, format).toMatchObject({ supersedes_id: first.id, amendment_reason: 'analyzer angle misread', site_label: 'upper notch root' });
+        expect([first.id, correction.id]).not.toContain(original.id);
+        expect(correction.id).not.toBe(amended.id);
+        // The amendment replaces the first reading among the current ones, as in the lab it came from.
+        const current = (await other.admin.get(`/v1/sites/${sites['upper notch root']!.id}/readings`)).body.items.map((r: { id: string }) => r.id);
+        expect(current, format).toHaveLength(2);
+        expect(current, format).toContain(correction.id);
+        expect(current, format).not.toContain(first.id);
+      }
+    }));
+
   it('pages through a lab larger than one page without losing or repeating a row', () =>
     inLab(async ({ technician, viewer, make }) => {
       await modelWithSites(make, 'UN-09', ['edge']);

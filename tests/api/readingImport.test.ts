@@ -136,6 +136,48 @@ describe('importing readings from a CSV file', () => {
     }));
 });
 
+describe('amendments in an imported file', () => {
+  const EXPORT_HEADER = 'id,model_code,site_label,stage,observed_at,operator,wavelength_nm,method,whole_order,supersedes_id,amendment_reason';
+  const row = (id: string, label: string, order: number, supersedes = '', reason = '') => `${id},UN-11,${label},before_load,${at(1)},R. Okafor,577,whole_order,${order},${supersedes},${reason}`;
+
+  it('refuses links it cannot rebuild, naming the row, and writes nothing', () =>
+    inLab(async ({ db, labId, technician, make }) => {
+      await modelWithSites(make, 'UN-11', ['upper', 'lower']);
+      const before = await storedCounts(db, labId);
+      const cases: [string[], { row: number; field: string; message: RegExp }][] = [
+        [[row('a', 'upper', 1, 'b', 'misread'), row('b', 'upper', 2, 'a', 'misread')], { row: 2, field: 'supersedes_id', message: /loop through rows 2, 3/ }],
+        [[row('a', 'upper', 1), row('b', 'upper', 2, 'a', 'misread'), row('c', 'upper', 3, 'a', 'again')], { row: 4, field: 'supersedes_id', message: /row 3 already supersedes row 2/ }],
+        [[row('a', 'upper', 1), row('b', 'lower', 2, 'a', 'misread')], { row: 3, field: 'supersedes_id', message: /another site/ }],
+        [[row('a', 'upper', 1), row('b', 'upper', 2, 'a')], { row: 3, field: 'amendment_reason', message: /needs its reason/ }],
+        [[row('a', 'upper', 1), row('a', 'upper', 2)], { row: 3, field: 'id', message: /also the id of row 2/ }],
+      ];
+      for (const [lines, problem] of cases) {
+        const reply = await postCsv(technician, csvOf([EXPORT_HEADER, ...lines]));
+        expect(reply.status, reply.text).toBe(422);
+        expect(reply.body.errors).toEqual([expect.objectContaining({ ...problem, message: expect.stringMatching(problem.message) })]);
+      }
+      expect(await storedCounts(db, labId)).toEqual(before);
+    }));
+
+  it('links an amendment listed before the reading it supersedes', () =>
+    inLab(async ({ technician, viewer, make }) => {
+      await modelWithSites(make, 'UN-11', ['upper']);
+      const reply = await postCsv(technician, csvOf([EXPORT_HEADER, row('b', 'upper', 2, 'a', 'misread'), row('a', 'upper', 1)]));
+      expect(reply.status, reply.text).toBe(201);
+      const [amendment, original] = reply.body.readingIds;
+      expect((await viewer.get(`/v1/readings/${amendment}`)).body).toMatchObject({ supersedesId: original, amendmentReason: 'misread', fringeOrder: 2 });
+      expect((await viewer.get(`/v1/readings/${original}`)).body).toMatchObject({ supersededById: amendment, fringeOrder: 1 });
+    }));
+
+  it('drops a supersedes id that names no row of the file, importing the row as an original', () =>
+    inLab(async ({ technician, viewer, make }) => {
+      await modelWithSites(make, 'UN-11', ['upper']);
+      const reply = await postCsv(technician, csvOf([EXPORT_HEADER, row('b', 'upper', 2, '7d0c6f5e-3a3b-4c55-9f0e-2d9a4b8b1c11', 'misread')]));
+      expect(reply.status, reply.text).toBe(201);
+      expect((await viewer.get(`/v1/readings/${reply.body.readingIds[0]}`)).body).toMatchObject({ supersedesId: null, amendmentReason: null });
+    }));
+});
+
 describe('importing readings from JSON, idempotency and content types', () => {
   const jsonFile = {
     readings: [

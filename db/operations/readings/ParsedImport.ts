@@ -12,6 +12,10 @@ export interface ImportCandidate {
   reading: unknown;
   /** Derived values a previous export wrote; they must agree with what the raw inputs give. */
   echo: { fringeOrder?: number; retardationNm?: number };
+  /** The row's id in the file (an export writes the stored id), when given. */
+  fileId?: string;
+  /** What an export wrote of an amendment: the id of the reading it supersedes, and why. */
+  amends?: { fileId: string; reason: string | undefined };
 }
 
 export interface ParsedImport {

@@ -78,10 +78,13 @@ function candidateOf(row: number, cells: Map<string, string>, problems: FieldPro
   const site = readSiteReference(row, { siteId: text('site_id'), modelCode: text('model_code'), siteLabel: text('site_label') }, fieldOf);
   problems.push(...site.problems);
   const optional = (key: string, value: unknown) => (value === undefined ? {} : { [key]: value });
+  const supersedesId = text('supersedes_id');
   return {
     row,
     site: site.site,
     echo,
+    ...optional('fileId', text('id')),
+    ...(supersedesId ? { amends: { fileId: supersedesId, reason: text('amendment_reason') } } : {}),
     reading: {
       stage: text('stage'),
       ...optional('loadN', num('load_n')),

@@ -16,16 +16,28 @@ function candidateOf(row: number, item: unknown, problems: FieldProblem[]): Impo
   }
   // Keys an export writes beside the inputs: ignored on import, except the derived values,
   // which must agree with the raw inputs they came from.
-  const { modelCode, siteLabel, siteId, fringeOrder, retardationNm, id: _id, fringeOrderUncertainty: _u, supersedesId: _s, amendmentReason: _a, recordedAt: _r, ...reading } =
+  const { modelCode, siteLabel, siteId, fringeOrder, retardationNm, id, fringeOrderUncertainty: _u, supersedesId, amendmentReason, recordedAt: _r, ...reading } =
     item as Record<string, unknown>;
   const echo: ImportCandidate['echo'] = {};
   for (const [key, value] of [['fringeOrder', fringeOrder], ['retardationNm', retardationNm]] as const) {
     if (typeof value === 'number') echo[key] = value;
     else if (value !== undefined && value !== null) problems.push({ row, field: key, message: 'must be a number (or left out)' });
   }
+  const texts: Record<'id' | 'supersedesId' | 'amendmentReason', string | undefined> = { id: undefined, supersedesId: undefined, amendmentReason: undefined };
+  for (const [key, value] of [['id', id], ['supersedesId', supersedesId], ['amendmentReason', amendmentReason]] as const) {
+    if (typeof value === 'string' && value !== '') texts[key] = value;
+    else if (value !== undefined && value !== null && value !== '') problems.push({ row, field: key, message: 'must be a string (or left out)' });
+  }
   const site = readSiteReference(row, { siteId, modelCode, siteLabel }, fieldOf);
   problems.push(...site.problems);
-  return { row, site: site.site, reading, echo };
+  return {
+    row,
+    site: site.site,
+    reading,
+    echo,
+    ...(texts.id ? { fileId: texts.id } : {}),
+    ...(texts.supersedesId ? { amends: { fileId: texts.supersedesId, reason: texts.amendmentReason } } : {}),
+  };
 }
 
 /**

@@ -25,7 +25,7 @@ export const READING_COLUMNS = [
   'notes',
 ] as const;
 
-/** Written by an export; an import accepts and ignores them (fringe order and retardation are checked). */
+/** Written by an export. An import uses id, supersedes_id and amendment_reason to rebuild amendments within the file, and ignores the rest. */
 export const OUTPUT_ONLY_COLUMNS = ['id', 'fringe_order_uncertainty', 'supersedes_id', 'amendment_reason', 'recorded_at'] as const;
 
 export const REQUIRED_COLUMNS = ['stage', 'observed_at', 'operator', 'wavelength_nm', 'method'] as const;
