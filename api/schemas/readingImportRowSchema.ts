@@ -16,10 +16,10 @@ export const ReadingImportRowSchema = z
     siteId: z.unknown().optional().openapi({ description: 'the site\'s UUID; give it, or modelCode and siteLabel, not both (null or empty counts as not given)' }),
     fringeOrder: z.number().nullable().optional().openapi({ description: 'if given, must agree with the value derived from the raw inputs' }),
     retardationNm: z.number().nullable().optional().openapi({ description: 'if given, must agree with the value derived from the raw inputs' }),
-    id: z.string().nullable().optional().openapi({ description: 'the exported reading\'s id; names the row for supersedesId within the file, and is not kept (the reading gets a new id)' }),
+    id: z.string().max(100).nullable().optional().openapi({ description: 'the exported reading\'s id; names the row for supersedesId within the file, and is not kept (the reading gets a new id)' }),
     fringeOrderUncertainty: z.unknown().optional().openapi(ignored('derived')),
-    supersedesId: z.string().nullable().optional().openapi({ description: 'the id of another row of this file that this row amends (same site, one successor each); an id not in the file is dropped' }),
-    amendmentReason: z.string().nullable().optional().openapi({ description: 'why the amended reading was corrected; required with a supersedesId that names a row of the file' }),
+    supersedesId: z.string().max(100).nullable().optional().openapi({ description: 'the id of another row of this file that this row amends (same site, one successor each); an id not in the file is dropped' }),
+    amendmentReason: z.string().max(500).nullable().optional().openapi({ description: 'why the amended reading was corrected; required with a supersedesId that names a row of the file' }),
     recordedAt: z.unknown().optional().openapi(ignored('the import records its own time')),
   })
   .strict()

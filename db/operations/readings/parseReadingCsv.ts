@@ -2,6 +2,7 @@ import { CsvError, parse } from 'csv-parse/sync';
 import { DomainError, type FieldProblem } from '../../../src/errors/DomainError.ts';
 import { decodeImportText } from './decodeImportText.ts';
 import type { ImportCandidate, ParsedImport } from './ParsedImport.ts';
+import { readAmendmentCells } from './readAmendmentCells.ts';
 import { readSiteReference } from './readSiteReference.ts';
 import { KNOWN_COLUMNS, NUMERIC_COLUMNS, REQUIRED_COLUMNS } from './readingTransferColumns.ts';
 
@@ -76,15 +77,14 @@ function candidateOf(row: number, cells: Map<string, string>, problems: FieldPro
     ...(!retardationIsInput && retardationNm !== undefined ? { retardationNm } : {}),
   };
   const site = readSiteReference(row, { siteId: text('site_id'), modelCode: text('model_code'), siteLabel: text('site_label') }, fieldOf);
-  problems.push(...site.problems);
+  const { problems: linkProblems, ...link } = readAmendmentCells(row, { id: text('id'), supersedesId: text('supersedes_id'), amendmentReason: text('amendment_reason') }, fieldOf);
+  problems.push(...site.problems, ...linkProblems);
   const optional = (key: string, value: unknown) => (value === undefined ? {} : { [key]: value });
-  const supersedesId = text('supersedes_id');
   return {
     row,
     site: site.site,
     echo,
-    ...optional('fileId', text('id')),
-    ...(supersedesId ? { amends: { fileId: supersedesId, reason: text('amendment_reason') } } : {}),
+    ...link,
     reading: {
       stage: text('stage'),
       ...optional('loadN', num('load_n')),

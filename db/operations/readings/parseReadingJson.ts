@@ -1,6 +1,7 @@
 import { DomainError, type FieldProblem } from '../../../src/errors/DomainError.ts';
 import { decodeImportText } from './decodeImportText.ts';
 import type { ImportCandidate, ParsedImport } from './ParsedImport.ts';
+import { readAmendmentCells } from './readAmendmentCells.ts';
 import { readSiteReference } from './readSiteReference.ts';
 
 const fieldOf = (path: readonly PropertyKey[]) => (path.length === 0 ? 'reading' : path.map(String).join('.'));
@@ -23,21 +24,10 @@ function candidateOf(row: number, item: unknown, problems: FieldProblem[]): Impo
     if (typeof value === 'number') echo[key] = value;
     else if (value !== undefined && value !== null) problems.push({ row, field: key, message: 'must be a number (or left out)' });
   }
-  const texts: Record<'id' | 'supersedesId' | 'amendmentReason', string | undefined> = { id: undefined, supersedesId: undefined, amendmentReason: undefined };
-  for (const [key, value] of [['id', id], ['supersedesId', supersedesId], ['amendmentReason', amendmentReason]] as const) {
-    if (typeof value === 'string' && value !== '') texts[key] = value;
-    else if (value !== undefined && value !== null && value !== '') problems.push({ row, field: key, message: 'must be a string (or left out)' });
-  }
   const site = readSiteReference(row, { siteId, modelCode, siteLabel }, fieldOf);
-  problems.push(...site.problems);
-  return {
-    row,
-    site: site.site,
-    reading,
-    echo,
-    ...(texts.id ? { fileId: texts.id } : {}),
-    ...(texts.supersedesId ? { amends: { fileId: texts.supersedesId, reason: texts.amendmentReason } } : {}),
-  };
+  const { problems: linkProblems, ...link } = readAmendmentCells(row, { id, supersedesId, amendmentReason }, fieldOf);
+  problems.push(...site.problems, ...linkProblems);
+  return { row, site: site.site, reading, echo, ...link };
 }
 
 /**
