@@ -17,23 +17,25 @@ export interface ImportRow extends CheckedRow {
  * in the same statement: the foreign key is checked at the statement's end.
  */
 export async function insertImportedReadings(db: Db, actor: Actor, importId: string, rows: readonly ImportRow[]): Promise<void> {
+  // Absent keys read as null and keep the parameter, which the server parses row by row, smaller.
+  const orAbsent = <T>(value: T | null) => (value === null ? undefined : value);
   const chunk = rows.map(({ id, siteId, columns: c, supersedesId, amendmentReason }) => ({
     id,
     site_id: siteId,
     stage: c.stage,
-    load_n: c.loadN,
+    load_n: orAbsent(c.loadN),
     observed_at: c.observedAt.toISOString(),
     operator: c.operator,
-    wavelength_nm: c.wavelengthNm,
+    wavelength_nm: orAbsent(c.wavelengthNm),
     method: c.method,
     raw_inputs: c.rawInputs,
     sign: c.sign,
     fringe_order: c.fringeOrder,
     fringe_order_uncertainty: c.fringeOrderUncertainty,
     retardation_nm: c.retardationNm,
-    notes: c.notes,
-    supersedes_id: supersedesId,
-    amendment_reason: amendmentReason,
+    notes: orAbsent(c.notes),
+    supersedes_id: orAbsent(supersedesId),
+    amendment_reason: orAbsent(amendmentReason),
   }));
   await db.execute(sql`
     insert into readings (id, lab_id, site_id, stage, load_n, observed_at, operator, wavelength_nm, method, raw_inputs, sign,
