@@ -7,6 +7,8 @@ export interface AmendmentCells {
   amendmentReason: unknown;
 }
 
+const absent = (value: unknown) => value === undefined || value === null || value === '';
+
 const MAX_LENGTH = { id: 100, supersedesId: 100, amendmentReason: 500 } as const;
 
 /**
@@ -15,10 +17,12 @@ const MAX_LENGTH = { id: 100, supersedesId: 100, amendmentReason: 500 } as const
  * without NUL characters, and within its length, whether or not a link is rebuilt from it.
  */
 export function readAmendmentCells(row: number, cells: AmendmentCells, fieldOf: (path: readonly PropertyKey[]) => string): Pick<ImportCandidate, 'fileId' | 'amends'> & { problems: FieldProblem[] } {
+  // Files that are not exports name none of these: answer them without building anything.
+  if (absent(cells.id) && absent(cells.supersedesId) && absent(cells.amendmentReason)) return { problems: [] };
   const problems: FieldProblem[] = [];
   const text = (key: keyof AmendmentCells): string | undefined => {
     const value = cells[key];
-    if (value === undefined || value === null || value === '') return undefined;
+    if (absent(value)) return undefined;
     const problem = (message: string) => problems.push({ row, field: fieldOf([key]), message });
     if (typeof value !== 'string') return void problem('must be text (or left out)');
     if (value.includes('\u0000')) return void problem('must not contain a NUL character');
