@@ -3,7 +3,7 @@ import { setImmediate as nextTurn } from 'node:timers/promises';
 import type { FieldProblem } from '../../../src/errors/DomainError.ts';
 import type { Db } from '../../Db.ts';
 import type { Actor } from '../Actor.ts';
-import { checkImportRow, type CheckedRow } from './checkImportRow.ts';
+import { checkImportRow } from './checkImportRow.ts';
 import { implausibleRowProblems } from './implausibleRowProblems.ts';
 import { type ImportRow, insertImportedReadings } from './insertImportedReadings.ts';
 import { linkImportAmendments } from './linkImportAmendments.ts';
@@ -37,12 +37,11 @@ export async function checkAndInsertRows(
   const links = linkImportAmendments(candidates, sites, parsed.fieldOf);
   const invalid: FieldProblem[] = [...parsed.problems, ...links.problems];
   const implausible: FieldProblem[] = [];
-  // Made up front so an amendment can name the new id of the earlier row it supersedes.
+  // Made up front so an amendment can name the new id of the row it supersedes, wherever that is in the file.
   const readingIds = candidates.map(() => randomUUID());
   let checkedRows = 0;
   let inserting: Promise<void> = Promise.resolve();
   for (let start = 0; start < candidates.length; start += CHUNK_ROWS) {
-    const checked: CheckedRow[] = [];
     const rows: ImportRow[] = [];
     for (const i of links.order.slice(start, start + CHUNK_ROWS)) {
       const candidate = candidates[i]!;
@@ -50,11 +49,11 @@ export async function checkAndInsertRows(
       invalid.push(...result.problems);
       if (!result.row) continue;
       const target = links.supersedes.get(i);
-      checked.push(result.row);
-      rows.push({ ...result.row, id: readingIds[i]!, supersedesId: target === undefined ? null : readingIds[target]!, amendmentReason: target === undefined ? null : candidate.amends!.reason!.trim() });
+      // readAmendmentCells trimmed the reason and linkImportAmendments made sure there is one.
+      rows.push({ ...result.row, id: readingIds[i]!, supersedesId: target === undefined ? null : readingIds[target]!, amendmentReason: target === undefined ? null : candidate.amends!.reason! });
     }
-    checkedRows += checked.length;
-    implausible.push(...implausibleRowProblems(contexts, checked, parsed.fieldOf));
+    checkedRows += rows.length;
+    implausible.push(...implausibleRowProblems(contexts, rows, parsed.fieldOf));
     // The previous chunk must be in before the next is sent, and a failed insert ends the import.
     await inserting;
     if (invalid.length > 0 || implausible.length > 0) continue;
