@@ -5,7 +5,8 @@ import type { Db } from '../../Db.ts';
 import type { Actor } from '../Actor.ts';
 import { checkImportRow } from './checkImportRow.ts';
 import { implausibleRowProblems } from './implausibleRowProblems.ts';
-import { type ImportRow, insertImportedReadings } from './insertImportedReadings.ts';
+import { encodeImportRows, type ImportRow } from './encodeImportRows.ts';
+import { insertImportedReadings } from './insertImportedReadings.ts';
 import { linkImportAmendments } from './linkImportAmendments.ts';
 import type { ParsedImport } from './ParsedImport.ts';
 import type { PlausibilityContext } from './readPlausibilityContexts.ts';
@@ -54,10 +55,13 @@ export async function checkAndInsertRows(
     }
     checkedRows += rows.length;
     implausible.push(...implausibleRowProblems(contexts, rows, parsed.fieldOf));
+    const clean = invalid.length === 0 && implausible.length === 0;
+    // Encoded before waiting, so the server is idle only while the chunk travels.
+    const encoded = clean ? encodeImportRows(rows) : undefined;
     // The previous chunk must be in before the next is sent, and a failed insert ends the import.
     await inserting;
-    if (invalid.length > 0 || implausible.length > 0) continue;
-    inserting = Promise.resolve(insertImportedReadings(tx, actor, importId, rows));
+    if (!encoded) continue;
+    inserting = Promise.resolve(insertImportedReadings(tx, actor, importId, encoded));
     // Its failure is awaited (and thrown) at the next chunk; until then it must not count as unhandled.
     inserting.catch(() => {});
     // The driver writes to its socket on a later turn; let it go out before the next chunk's checks.
