@@ -8,12 +8,6 @@ import type { BenchReading } from './labHistory.ts';
 const CSV_HEADER = 'model_code,site_label,stage,load_n,observed_at,operator,wavelength_nm,method,fringe_order\n';
 const COPY_COLUMNS = 'id, lab_id, site_id, stage, load_n, observed_at, operator, wavelength_nm, method, raw_inputs, sign, fringe_order, fringe_order_uncertainty, retardation_nm, import_id, recorded_by_key_id';
 
-export interface RateFigure {
-  rows: number;
-  seconds: number;
-  rowsPerSecond: number;
-}
-
 /** A chunk as the lab's spreadsheet would export it: sites by model code and label. */
 export function csvBody(chunk: readonly BenchReading[]): string {
   const lines = chunk.map((r) =>
@@ -52,45 +46,87 @@ export function copyBody(chunk: readonly BenchReading[], { labId, importId, keyI
     .join('\n') + '\n';
 }
 
-const rate = (rows: number, startedMs: number): RateFigure => {
-  const seconds = (performance.now() - startedMs) / 1000;
-  return { rows, seconds, rowsPerSecond: rows / seconds };
-};
-
 class RollBack extends Error {}
 
+/** One file of the bench history in both forms, with the import record its COPY rows belong to. */
+export interface BenchFile {
+  rows: number;
+  csv: string;
+  copy: string;
+  origin: CopyOrigin;
+}
+
+export interface ImportAgainstCopy {
+  importRowsPerSecond: number;
+  copyRowsPerSecond: number;
+  /** Import rate over COPY rate, file by file: median and range. */
+  fileRatio: { median: number; min: number; max: number };
+  files: number;
+}
+
 /**
- * Raw COPY of the rows into readings, after one import record per file as the import writes,
- * then rolled back so the import below starts from the same empty table; the figure is the time
- * until the server has taken every row.
+ * Raw COPY of one file's rows into readings, after its import record as the import writes, then
+ * rolled back (and the dead rows vacuumed away, untimed) so the table is as before; the figure
+ * is the time until the server has taken every row.
  */
-export async function measureCopy(sql: Sql, origins: readonly CopyOrigin[], bodies: readonly string[], rows: number): Promise<RateFigure> {
+async function copyOnce(sql: Sql, { copy, origin }: BenchFile): Promise<number> {
+  let seconds = 0;
   const started = performance.now();
-  let figure: RateFigure | undefined;
   try {
     await sql.begin(async (tx) => {
-      for (const { importId, labId, keyId } of origins) {
-        await tx`insert into reading_imports (id, lab_id, format, row_count, imported_by_key_id) values (${importId}, ${labId}, 'csv', 0, ${keyId})`;
-      }
+      await tx`insert into reading_imports (id, lab_id, format, row_count, imported_by_key_id) values (${origin.importId}, ${origin.labId}, 'csv', 0, ${origin.keyId})`;
       const writable = await tx.unsafe(`copy readings (${COPY_COLUMNS}) from stdin`).writable();
-      await pipeline(Readable.from(bodies), writable);
-      figure = rate(rows, started);
+      await pipeline(Readable.from([copy]), writable);
+      seconds = (performance.now() - started) / 1000;
       throw new RollBack();
     });
   } catch (error) {
     if (!(error instanceof RollBack)) throw error;
   }
   await sql.unsafe('vacuum readings');
-  return figure!;
+  return seconds;
 }
 
-/** The same rows through POST /v1/readings/import, one request per chunk, in process. */
-export async function measureImport(app: ReturnType<typeof createApp>, key: string, bodies: readonly string[], rows: number): Promise<RateFigure> {
+/** The file through POST /v1/readings/import in process; it stays in the table. */
+async function importOnce(app: ReturnType<typeof createApp>, key: string, { csv }: BenchFile): Promise<number> {
   const started = performance.now();
-  for (const body of bodies) {
-    const res = await app.request('/v1/readings/import', { method: 'POST', headers: { authorization: `Bearer ${key}`, 'content-type': 'text/csv' }, body });
-    if (res.status !== 201) throw new Error(`import answered ${res.status}: ${(await res.text()).slice(0, 500)}`);
-    await res.arrayBuffer();
+  const res = await app.request('/v1/readings/import', { method: 'POST', headers: { authorization: `Bearer ${key}`, 'content-type': 'text/csv' }, body: csv });
+  if (res.status !== 201) throw new Error(`import answered ${res.status}: ${(await res.text()).slice(0, 500)}`);
+  await res.arrayBuffer();
+  return (performance.now() - started) / 1000;
+}
+
+const median = (values: readonly number[]) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length / 2;
+  return Number.isInteger(mid) ? (sorted[mid - 1]! + sorted[mid]!) / 2 : sorted[Math.floor(mid)]!;
+};
+
+/**
+ * Each file is COPYed (and rolled back) and imported back to back, the order alternating from
+ * file to file, so both paths meet the same table size, a warm cache as often as a cold one,
+ * and the same passing load on the machine; the file-by-file ratio shows how steady that is.
+ */
+export async function measureImportAgainstCopy(sql: Sql, app: ReturnType<typeof createApp>, key: string, files: readonly BenchFile[], onFile: (done: number) => void): Promise<ImportAgainstCopy> {
+  let copySeconds = 0;
+  let importSeconds = 0;
+  let rows = 0;
+  const ratios: number[] = [];
+  for (const [i, file] of files.entries()) {
+    let copy: number;
+    let imported: number;
+    if (i % 2 === 0) {
+      copy = await copyOnce(sql, file);
+      imported = await importOnce(app, key, file);
+    } else {
+      imported = await importOnce(app, key, file);
+      copy = await copyOnce(sql, file);
+    }
+    copySeconds += copy;
+    importSeconds += imported;
+    rows += file.rows;
+    ratios.push(copy / imported);
+    onFile(i + 1);
   }
-  return rate(rows, started);
+  return { importRowsPerSecond: rows / importSeconds, copyRowsPerSecond: rows / copySeconds, fileRatio: { median: median(ratios), min: Math.min(...ratios), max: Math.max(...ratios) }, files: files.length };
 }

@@ -11,7 +11,7 @@ import { compareUnitsSql } from '../db/operations/trends/compareTrendGroups.ts';
 import { edgeAgingPointsSql, storedModelsSql } from '../db/operations/trends/edgeAgingSql.ts';
 import { batchSeriesSql } from '../db/operations/trends/readControlChart.ts';
 import { residualSummarySql } from '../db/operations/trends/residualSummarySql.ts';
-import { type CopyOrigin, copyBody, csvBody, measureCopy, measureImport } from './importRate.ts';
+import { type BenchFile, copyBody, csvBody, measureImportAgainstCopy } from './importRate.ts';
 import { BAD_BATCH, batchCode, type HistoryPlan, planModels, readingChunks } from './labHistory.ts';
 import { type LatencyCase, measureLatency } from './latency.ts';
 import { loadStructure } from './loadStructure.ts';
@@ -42,22 +42,16 @@ try {
   await loadStructure(raw, lab.labId, plan, modelList, sites);
   log(`structure: ${modelList.length} models, ${sites.length} sites`);
 
-  const csv: string[] = [];
-  const copy: string[] = [];
-  const origins: CopyOrigin[] = [];
-  let rows = 0;
+  const files: BenchFile[] = [];
   for (const chunk of readingChunks(sites, plan, CHUNK_ROWS)) {
-    csv.push(csvBody(chunk));
-    origins.push({ labId: lab.labId, importId: randomUUID(), keyId: technician.id });
-    copy.push(copyBody(chunk, origins[origins.length - 1]!));
-    rows += chunk.length;
+    const origin = { labId: lab.labId, importId: randomUUID(), keyId: technician.id };
+    files.push({ rows: chunk.length, csv: csvBody(chunk), copy: copyBody(chunk, origin), origin });
   }
-  log(`generated ${rows} readings in ${csv.length} files`);
-  const copyRate = await measureCopy(raw, origins, copy, rows);
-  log(`COPY: ${copyRate.rowsPerSecond.toFixed(0)} rows/s (rolled back)`);
+  const rows = files.reduce((sum, file) => sum + file.rows, 0);
+  log(`generated ${rows} readings in ${files.length} files`);
   const app = createApp({ db: handle.db, config: defaultConfig() });
-  const importRate = await measureImport(app, technician.secret, csv, rows);
-  log(`import route: ${importRate.rowsPerSecond.toFixed(0)} rows/s`);
+  const imports = await measureImportAgainstCopy(raw, app, technician.secret, files, (done) => log(`file ${done} of ${files.length}: COPYed (rolled back) and imported`));
+  log(`import route: ${imports.importRowsPerSecond.toFixed(0)} rows/s, COPY ${imports.copyRowsPerSecond.toFixed(0)} rows/s`);
   await raw.unsafe('vacuum analyze');
 
   const bad = batchCode(BAD_BATCH);
@@ -81,7 +75,7 @@ try {
   const sameQuery = async () => (await reader`select * from sites where id = ${site!.id} and lab_id = ${lab.labId}`)[0];
   const throughput = await measureThroughput(app, technician.secret, `/v1/sites/${site!.id}`, sameQuery, 20_000, 20_000).finally(() => reader.end({ timeout: 5 }));
   const [versions] = await raw<{ version: string }[]>`select current_setting('server_version') as version`;
-  printReport({ rows, models: modelList.length, sites: sites.length, copyRate, importRate, latency, throughput, nodeVersion: process.version, postgresVersion: versions!.version });
+  printReport({ rows, models: modelList.length, sites: sites.length, imports, latency, throughput, nodeVersion: process.version, postgresVersion: versions!.version });
 } finally {
   await raw.end({ timeout: 5 });
   await handle.close();
