@@ -11,6 +11,7 @@ const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/;
 const NUMERIC: ReadonlySet<string> = new Set(NUMERIC_COLUMNS);
 const METHOD_INPUTS = { whole_order: 'wholeOrder', lower_order: 'lowerOrder', analyzer_rotation_deg: 'analyzerRotationDeg', moved_fringe: 'movedFringe', srgb_hex: 'srgbHex', named_colour: 'namedColour', illuminant: 'illuminant' } as const;
 const TEXT_INPUTS: ReadonlySet<string> = new Set(['moved_fringe', 'srgb_hex', 'named_colour', 'illuminant']);
+const METHOD_INPUT_ENTRIES = Object.entries(METHOD_INPUTS);
 
 /** A zod path of CreateReadingInput as the CSV names it: `reading` alone is the method column. */
 function fieldOf(path: readonly PropertyKey[]): string {
@@ -55,12 +56,23 @@ function numberCell(row: number, column: string, cell: string, problems: FieldPr
   return undefined;
 }
 
-function candidateOf(row: number, cells: Map<string, string>, problems: FieldProblem[]): ImportCandidate {
-  const text = (column: string) => cells.get(column) || undefined;
-  const num = (column: string) => (NUMERIC.has(column) ? numberCell(row, column, cells.get(column) ?? '', problems) : undefined);
+/** A row's cell by column name; the header's positions are looked up once per file. */
+type CellOf = (cells: readonly string[], column: string) => string;
+
+function cellReader(header: readonly string[]): CellOf {
+  const position = new Map(header.map((name, i) => [name, i]));
+  return (cells, column) => {
+    const i = position.get(column);
+    return i === undefined ? '' : (cells[i] ?? '');
+  };
+}
+
+function candidateOf(row: number, cells: readonly string[], cellOf: CellOf, problems: FieldProblem[]): ImportCandidate {
+  const text = (column: string) => cellOf(cells, column) || undefined;
+  const num = (column: string) => (NUMERIC.has(column) ? numberCell(row, column, cellOf(cells, column), problems) : undefined);
   const method = text('method');
   const reading: Record<string, unknown> = { method };
-  for (const [column, key] of Object.entries(METHOD_INPUTS)) {
+  for (const [column, key] of METHOD_INPUT_ENTRIES) {
     const value = TEXT_INPUTS.has(column) ? text(column) : num(column);
     if (value !== undefined) reading[key] = value;
   }
@@ -112,6 +124,7 @@ export function parseReadingCsv(body: Uint8Array): ParsedImport {
   if (fromHeader.length > 0) throw new DomainError('invalid_input', 'The CSV header is not usable. Nothing was imported.', fromHeader);
   const problems: FieldProblem[] = [];
   const candidates: ImportCandidate[] = [];
+  const cellOf = cellReader(header);
   rows.forEach((cells, index) => {
     const row = index + 2;
     if (cells.every((cell) => cell === '')) return;
@@ -119,7 +132,7 @@ export function parseReadingCsv(body: Uint8Array): ParsedImport {
       problems.push({ row, field: 'file', message: `the row has ${cells.length} cells, the header ${header.length}` });
       return;
     }
-    candidates.push(candidateOf(row, new Map(header.map((name, i) => [name, cells[i] ?? ''])), problems));
+    candidates.push(candidateOf(row, cells, cellOf, problems));
   });
   return { format: 'csv', candidates, problems, fieldOf };
 }
