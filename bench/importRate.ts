@@ -2,6 +2,7 @@ import { Readable } from 'node:stream';
 import { pipeline } from 'node:stream/promises';
 import type { Sql } from 'postgres';
 import type { createApp } from '../api/createApp.ts';
+import { percentileLinear } from '../src/statistics/percentileLinear.ts';
 import { deriveReadingColumns } from '../db/operations/readings/deriveReadingColumns.ts';
 import type { BenchReading } from './labHistory.ts';
 
@@ -96,12 +97,6 @@ async function importOnce(app: ReturnType<typeof createApp>, key: string, { csv 
   return (performance.now() - started) / 1000;
 }
 
-const median = (values: readonly number[]) => {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = sorted.length / 2;
-  return Number.isInteger(mid) ? (sorted[mid - 1]! + sorted[mid]!) / 2 : sorted[Math.floor(mid)]!;
-};
-
 /**
  * Each file is COPYed (and rolled back) and imported back to back, the order alternating from
  * file to file, so both paths meet the same table size, a warm cache as often as a cold one,
@@ -128,5 +123,5 @@ export async function measureImportAgainstCopy(sql: Sql, app: ReturnType<typeof 
     ratios.push(copy / imported);
     onFile(i + 1);
   }
-  return { importRowsPerSecond: rows / importSeconds, copyRowsPerSecond: rows / copySeconds, fileRatio: { median: median(ratios), min: Math.min(...ratios), max: Math.max(...ratios) }, files: files.length };
+  return { importRowsPerSecond: rows / importSeconds, copyRowsPerSecond: rows / copySeconds, fileRatio: { median: percentileLinear([...ratios].sort((x, y) => x - y), 0.5), min: Math.min(...ratios), max: Math.max(...ratios) }, files: files.length };
 }
