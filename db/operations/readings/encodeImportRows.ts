@@ -10,7 +10,6 @@ export interface ImportRow extends CheckedRow {
 /** Rows ready for insertImportedReadings: the one jsonb parameter's text. */
 export interface EncodedImportRows {
   json: string;
-  count: number;
 }
 
 // Absent keys read as null and keep the parameter, which the server parses row by row, smaller.
@@ -22,7 +21,7 @@ const orAbsent = <T>(value: T | null) => (value === null ? undefined : value);
  *
  * @example
  * encodeImportRows([{ id, siteId, columns, supersedesId: null, amendmentReason: null, row: 2 }]);
- * // { json: '[{"id":"…","site_id":"…","stage":"before_load",…}]', count: 1 }
+ * // { json: '[{"id":"…","site_id":"…","stage":"before_load",…}]' }
  */
 export function encodeImportRows(rows: readonly ImportRow[]): EncodedImportRows {
   const json = JSON.stringify(
@@ -45,5 +44,5 @@ export function encodeImportRows(rows: readonly ImportRow[]): EncodedImportRows 
       amendment_reason: orAbsent(amendmentReason),
     })),
   );
-  return { json, count: rows.length };
+  return { json };
 }
